@@ -40,7 +40,8 @@ export PORT="$WEB_PORT"
 export PG_PORT REDIS_PORT SMTP_PORT MAIL_UI_PORT DB_NAME DB_USER PROFILE DATA_DIR ROOT
 
 as_pg() {
-  if [ "$(id -u)" = 0 ]; then runuser -u "$PG_OS_USER" -- "$@"; else "$@"; fi
+  # From / so the unprivileged user is not left in a folder it cannot enter.
+  if [ "$(id -u)" = 0 ]; then (cd / && runuser -u "$PG_OS_USER" -- "$@"); else "$@"; fi
 }
 
 log() { printf '\033[1;34m[bellows]\033[0m %s\n' "$*"; }
