@@ -26,7 +26,13 @@ const VALVE_KEYS: Record<string, string> = {
   r_ratio: "rRatio", tro_psig: "tropsig", installed_on: "installedOn",
 };
 
-export interface CsvRowError { row: number; column: string; message: string }
+export interface CsvRowError {
+  row: number;
+  column: string;
+  message: string;
+  /** The well identifier of the row, when it has one (valve files). */
+  key?: string;
+}
 
 export interface ParsedWellRow { row: number; field: string; pad: string; well: ReturnType<typeof WellSchema.parse> }
 export interface ParsedValveRow { row: number; uwi: string; mandrel: ReturnType<typeof MandrelSchema.parse> }
@@ -89,7 +95,9 @@ export function parseRegisterCsv(text: string, fileName = "file"): ParsedRegiste
     if (!uwi) errors.push({ row, column: "uwi", message: "Enter the well identifier" });
     const r = MandrelSchema.safeParse(obj);
     if (!r.success) {
-      for (const issue of r.error.issues) errors.push({ row, column: camelToColumn(VALVE_KEYS, String(issue.path[0] ?? "")), message: issue.message });
+      for (const issue of r.error.issues) {
+        errors.push({ row, column: camelToColumn(VALVE_KEYS, String(issue.path[0] ?? "")), message: issue.message, ...(uwi ? { key: uwi } : {}) });
+      }
     } else if (uwi) {
       rows.push({ row, uwi, mandrel: r.data });
     }

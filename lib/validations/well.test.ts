@@ -46,7 +46,7 @@ describe("parseRegisterCsv", () => {
     const r = parseRegisterCsv(csv, "valves.csv");
     expect(r.kind).toBe("valves");
     expect(r.rows).toHaveLength(1);
-    expect(r.errors).toEqual([{ row: 3, column: "kind", message: "Valve kind must be ipo, orifice or dummy" }]);
+    expect(r.errors).toEqual([{ row: 3, column: "kind", message: "Valve kind must be ipo, orifice or dummy", key: "EX-1" }]);
   });
   it("refuses a file whose header is neither kind", () => {
     expect(parseRegisterCsv("a,b\n1,2\n", "x.csv").errors[0].message).toMatch(/x.csv: the header must name/);

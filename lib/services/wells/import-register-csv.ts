@@ -37,6 +37,10 @@ export async function importRegisterCsv(actor: Actor, input: { text: string; fil
     : importValves(actor, parsed.rows, parsed.errors, !!input.apply);
 }
 
+/** Data rows seen: good ones plus those with errors, each once (the header is row 1). */
+const countRows = (rows: { row: number }[], errors: CsvRowError[]) =>
+  new Set([...rows.map((r) => r.row), ...errors.filter((e) => e.row > 1).map((e) => e.row)]).size;
+
 const same = (a: Record<string, unknown>, b: Record<string, unknown>) =>
   Object.keys(a).every((k) => (a[k] ?? null) === (b[k] ?? null) || (typeof a[k] === "number" && Math.abs(Number(a[k]) - Number(b[k])) < 1e-9));
 
@@ -49,6 +53,7 @@ async function importValves(
   const byWell = new Map<string, { row: number; mandrel: MandrelInput }[]>();
   for (const r of rows) byWell.set(r.uwi, [...(byWell.get(r.uwi) ?? []), { row: r.row, mandrel: r.mandrel }]);
   const badRows = new Set(errors.map((e) => e.row));
+  const parsedErrorUwis = new Set(errors.map((e) => e.key).filter((k): k is string => !!k));
   const wells = await Well.findAll({ where: { organization_id: actor.organizationId, uwi: [...byWell.keys()] } });
   const wellByUwi = new Map(wells.map((w) => [w.uwi, w]));
   const changes: ImportChange[] = [];
@@ -61,7 +66,10 @@ async function importValves(
       changes.push({ key: uwi, action: "skipped", detail: "unknown well" });
       continue;
     }
-    const check = ValveStringSchema.safeParse(list.map((r) => r.mandrel));
+    // Rows that failed to parse are already reported; checking the order of
+    // what is left would blame good rows for the gap.
+    const hasParseErrors = parsedErrorUwis.has(uwi);
+    const check = hasParseErrors ? { success: true as const } : ValveStringSchema.safeParse(list.map((r) => r.mandrel));
     if (!check.success) {
       const sorted = [...list].sort((a, b) => a.mandrel.position - b.mandrel.position);
       for (const issue of check.error.issues) {
@@ -69,7 +77,7 @@ async function importValves(
         errors.push({ row: at.row, column: String(issue.path[1] ?? ""), message: issue.message });
       }
     }
-    const hasBad = !check.success || list.some((r) => badRows.has(r.row)) || errors.some((e) => list.some((r) => r.row === e.row));
+    const hasBad = hasParseErrors || !check.success || list.some((r) => badRows.has(r.row));
     if (hasBad) {
       changes.push({ key: uwi, action: "skipped", detail: "rows with errors: fix them and import again" });
       continue;
@@ -92,12 +100,14 @@ async function importValves(
       for (const { well, list } of toWrite) {
         await Mandrel.destroy({ where: { well_id: well.id, organization_id: actor.organizationId }, transaction });
         await Mandrel.bulkCreate(list.map((m) => ({ ...mandrelColumns(m), well_id: well.id, organization_id: actor.organizationId })), { transaction });
+        await well.changed("updated_at", true);
+        await well.save({ transaction });
         await writeAudit(actor, { action: "well.valves.import", entityType: "well", entityId: well.id, after: list }, transaction);
       }
     });
   }
   errors.sort((a, b) => a.row - b.row);
-  return { kind: "valves", applied: apply, rowCount: rows.length + new Set(errors.map((e) => e.row)).size, errors, changes };
+  return { kind: "valves", applied: apply, rowCount: countRows(rows, errors), errors, changes };
 }
 
 async function importWells(
@@ -136,5 +146,5 @@ async function importWells(
   };
   if (apply) await sequelize.transaction(work);
   else await work();
-  return { kind: "wells", applied: apply, rowCount: rows.length + new Set(errors.map((e) => e.row)).size, errors, changes };
+  return { kind: "wells", applied: apply, rowCount: countRows(rows, errors), errors, changes };
 }
