@@ -25,5 +25,5 @@ AuditLog.init(
     after: { type: DataTypes.JSONB, allowNull: true },
     created_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "audit_logs", updatedAt: false },
+  { sequelize, modelName: "AuditLog", tableName: "audit_logs", updatedAt: false },
 );

@@ -23,5 +23,5 @@ AuthToken.init(
     used_at: { type: DataTypes.DATE, allowNull: true },
     created_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "auth_tokens", updatedAt: false },
+  { sequelize, modelName: "AuthToken", tableName: "auth_tokens", updatedAt: false },
 );

@@ -37,5 +37,5 @@ DiagnoseRun.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "diagnose_runs" },
+  { sequelize, modelName: "DiagnoseRun", tableName: "diagnose_runs" },
 );

@@ -27,5 +27,5 @@ FieldEvent.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "field_events" },
+  { sequelize, modelName: "FieldEvent", tableName: "field_events" },
 );

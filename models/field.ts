@@ -19,5 +19,5 @@ Field.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "fields" },
+  { sequelize, modelName: "Field", tableName: "fields" },
 );

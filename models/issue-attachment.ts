@@ -25,5 +25,5 @@ IssueAttachment.init(
     storage_key: { type: DataTypes.STRING(300), allowNull: false },
     created_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "issue_attachments", updatedAt: false },
+  { sequelize, modelName: "IssueAttachment", tableName: "issue_attachments", updatedAt: false },
 );

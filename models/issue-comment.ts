@@ -21,5 +21,5 @@ IssueComment.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "issue_comments" },
+  { sequelize, modelName: "IssueComment", tableName: "issue_comments" },
 );

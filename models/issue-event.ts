@@ -25,5 +25,5 @@ IssueEvent.init(
     data: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
     created_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "issue_events", updatedAt: false },
+  { sequelize, modelName: "IssueEvent", tableName: "issue_events", updatedAt: false },
 );

@@ -68,5 +68,5 @@ Issue.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "issues" },
+  { sequelize, modelName: "Issue", tableName: "issues" },
 );

@@ -36,5 +36,5 @@ Mandrel.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "mandrels" },
+  { sequelize, modelName: "Mandrel", tableName: "mandrels" },
 );

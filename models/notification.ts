@@ -25,5 +25,5 @@ Notification.init(
     read_at: { type: DataTypes.DATE, allowNull: true },
     created_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "notifications", updatedAt: false },
+  { sequelize, modelName: "Notification", tableName: "notifications", updatedAt: false },
 );

@@ -19,5 +19,5 @@ Organization.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "organizations" },
+  { sequelize, modelName: "Organization", tableName: "organizations" },
 );

@@ -19,5 +19,5 @@ Pad.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "pads" },
+  { sequelize, modelName: "Pad", tableName: "pads" },
 );

@@ -23,5 +23,5 @@ RuleSetting.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "rule_settings" },
+  { sequelize, modelName: "RuleSetting", tableName: "rule_settings" },
 );

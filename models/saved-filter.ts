@@ -21,5 +21,5 @@ SavedFilter.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "saved_filters" },
+  { sequelize, modelName: "SavedFilter", tableName: "saved_filters" },
 );

@@ -30,5 +30,5 @@ User.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "users" },
+  { sequelize, modelName: "User", tableName: "users" },
 );

@@ -52,5 +52,5 @@ Well.init(
     created_at: DataTypes.DATE,
     updated_at: DataTypes.DATE,
   },
-  { sequelize, tableName: "wells" },
+  { sequelize, modelName: "Well", tableName: "wells" },
 );
