@@ -130,9 +130,9 @@ describe("operating point of a string", () => {
     expect(point.notes).toContain("no valve can pass gas at this casing pressure");
   });
 
-  it("uses the default 0.15 psi/ft tubing gradient when none is given (our assumption)", () => {
+  it("uses the default 0.1 psi/ft tubing gradient when none is given (our assumption)", () => {
     const point = inferOperatingPoint(design, { casingPsig: 900, tubingPsig: 150 });
-    expect(point.valves[0].tubingAtDepthPsig).toBeCloseTo(150 + 0.15 * 2500, 9);
+    expect(point.valves[0].tubingAtDepthPsig).toBeCloseTo(150 + 0.1 * 2500, 9);
   });
 });
 

@@ -7,7 +7,7 @@
 // - valve temperature from the straight geothermal line (temperature.ts);
 // - casing pressure at depth from the static gas column;
 // - tubing pressure at depth from a straight flowing gradient below the surface tubing
-//   pressure. OUR STATED ASSUMPTION: 0.15 psi/ft by default, inside the 0.1–0.2 psi/ft
+//   pressure. OUR STATED ASSUMPTION: 0.1 psi/ft by default, inside the 0.1–0.2 psi/ft
 //   usual for a gas-lifted column above the injection point; tunable per well. Below the
 //   injection point the real gradient is heavier, so the tubing pressure there is low
 //   and the deeper valves look more open-able than they are;
@@ -31,7 +31,7 @@ import { thornhillCraver } from "@/lib/gaslift/orifice-flow";
 import { temperatureAtDepth } from "@/lib/gaslift/temperature";
 
 /** Default flowing tubing gradient above the injection point, psi/ft (our assumption, see header). */
-export const DEFAULT_TUBING_GRADIENT_PSI_PER_FT = 0.15;
+export const DEFAULT_TUBING_GRADIENT_PSI_PER_FT = 0.1;
 
 /**
  * A measured injection rate above this multiple of the port's Thornhill–Craver passage
@@ -41,7 +41,7 @@ export const DEFAULT_TUBING_GRADIENT_PSI_PER_FT = 0.15;
 export const DEFAULT_RATE_TOLERANCE = 1.1;
 
 export interface OperatingPointOptions {
-  /** Flowing tubing gradient, psi/ft of TVD. Default 0.15. */
+  /** Flowing tubing gradient, psi/ft of TVD. Default 0.1 (the rules use the same default). */
   tubingGradientPsiPerFt?: number;
   /** Dome correction; default real-gas nitrogen, gauge basis. */
   dome?: DomeOptions;
