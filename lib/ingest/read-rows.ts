@@ -12,6 +12,10 @@
 // Returns a ReadSummary; a file-level problem (a mapped column missing from the header,
 // the one well of a wide file unknown) is reported in `summary.refusal`, not thrown.
 //
+// The CSV is tokenized by our CsvTokenizer, not papaparse's stream mode: papaparse gives no
+// physical line numbers for refused rows, and measured on 1 M rows (46.5 MB) it parsed in
+// 3.3 s against the tokenizer's 2.0 s, so switching would cost both.
+//
 // Memory stays bounded whatever the file size: chunks are tokenized as they arrive,
 // fields are capped (see CsvTokenizer), the tokenizer pauses as soon as a batch is full
 // (a batch holds batchSize values, plus at most one wide row's worth), and refusal

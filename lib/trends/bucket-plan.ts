@@ -1,0 +1,63 @@
+// How to reduce a trend for a chart of a given pixel width. A line chart cannot show
+// more than about one value per pixel column, so past ~2 points per pixel we send
+// each time bucket's minimum and maximum instead of every value: the envelope keeps
+// one-minute spikes and heading cycles visible, which an average would smooth away.
+// (Min/max per pixel column is common practice for time-series plotting.)
+
+export const MINUTE_MS = 60_000;
+/** The rollup table's bucket (samples_15m). */
+export const ROLLUP_BUCKET_MS = 15 * MINUTE_MS;
+/** Hard cap on points per signal, whatever the width asked for. */
+export const MAX_POINTS_PER_SIGNAL = 2000;
+export const DEFAULT_WIDTH_PX = 1200;
+
+/**
+ * Bucket lengths we use, shortest first. Every step of 15 minutes and up is a whole
+ * number of rollup buckets, so long ranges can be answered from samples_15m alone;
+ * each also divides a day, so buckets line up with midnight UTC.
+ */
+export const NICE_BUCKETS_MS: readonly number[] = [
+  10_000, 30_000,
+  ...[1, 2, 5, 10, 15, 30, 60, 120, 180, 360, 720, 1440].map((m) => m * MINUTE_MS),
+];
+
+export type Resolution = "raw" | "minmax";
+export type BucketSource = "samples" | "rollup";
+
+export interface BucketPlan {
+  resolution: Resolution;
+  /** 0 for raw. */
+  bucketMs: number;
+  /** Which table the buckets are computed from; null for raw. */
+  source: BucketSource | null;
+  /** Points per signal we allow. */
+  cap: number;
+}
+
+/** Points per signal for a chart `widthPx` wide: two per pixel column, at most 2,000. */
+export function pointCap(widthPx: number): number {
+  const w = Number.isFinite(widthPx) && widthPx > 0 ? Math.round(widthPx) : DEFAULT_WIDTH_PX;
+  return Math.max(2, Math.min(2 * w, MAX_POINTS_PER_SIGNAL));
+}
+
+/** The shortest nice bucket that keeps two points per bucket within the cap. */
+export function chooseBucketMs(rangeMs: number, cap: number): number {
+  const buckets = Math.max(1, Math.floor(cap / 2));
+  const needed = rangeMs / buckets;
+  for (const b of NICE_BUCKETS_MS) if (b >= needed) return b;
+  // Longer than a day per bucket (multi-year ranges): whole days.
+  return Math.ceil(needed / NICE_BUCKETS_MS[NICE_BUCKETS_MS.length - 1]) * NICE_BUCKETS_MS[NICE_BUCKETS_MS.length - 1];
+}
+
+/**
+ * Raw values when the densest signal fits under the cap; otherwise min/max buckets,
+ * read from the 15-minute rollup when the bucket is a whole number of rollup buckets
+ * (far fewer rows to read) and from the samples themselves for shorter buckets.
+ */
+export function planBuckets(input: { fromMs: number; toMs: number; widthPx: number; maxRawCount: number }): BucketPlan {
+  const cap = pointCap(input.widthPx);
+  if (input.maxRawCount <= cap) return { resolution: "raw", bucketMs: 0, source: null, cap };
+  const bucketMs = chooseBucketMs(input.toMs - input.fromMs, cap);
+  const source: BucketSource = bucketMs % ROLLUP_BUCKET_MS === 0 ? "rollup" : "samples";
+  return { resolution: "minmax", bucketMs, source, cap };
+}

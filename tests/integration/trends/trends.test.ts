@@ -1,0 +1,144 @@
+// The trend route's service against the real test database: reduction to at most
+// ~2,000 points per signal with spikes kept, raw values when zoomed in, organization
+// isolation, and the valve reference lines. Series are invented (trend-fixtures.ts);
+// the expected figures are regression values of our own code, except the valve lines,
+// which are checked against valveSurfacePressures (itself tested against DOMAIN.md's
+// [published]/[computed] values in lib/gaslift).
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { FieldEvent, Issue, Mandrel } from "@/models";
+import { closeDb, makeOrg, type TestOrg } from "../helpers";
+import { getTrendData } from "@/lib/services/trends/get-trend-data";
+import { getWell } from "@/lib/services/wells/get-well";
+import { getSamplePool } from "@/lib/services/samples/sample-db";
+import { mandrelColumns } from "@/lib/services/wells/well-dto";
+import { valveSurfacePressures } from "@/lib/gaslift/operating-point";
+import { formatValveLabel } from "@/lib/trends/valve-label";
+import { AppError } from "@/lib/errors";
+import { DAY, MINUTE, makeFixture, valueAt, writeFixture } from "./trend-fixtures";
+
+let org: TestOrg;
+let other: TestOrg;
+const END = Date.UTC(2026, 9, 30); // 90 days: early August to the end of October 2026
+const fixture = makeFixture(END - 90 * DAY, 90);
+
+beforeAll(async () => {
+  org = await makeOrg("trends");
+  other = await makeOrg("trends-other");
+  // An invented valve string: three IPO unloading valves and an orifice.
+  const valves = [
+    { position: 1, mdFt: 2600, tvdFt: 2600, kind: "ipo", portIn: 0.25, valveOdIn: 1.5, rRatio: null, tropsig: 1010 },
+    { position: 2, mdFt: 4200, tvdFt: 4200, kind: "ipo", portIn: 0.25, valveOdIn: 1.5, rRatio: null, tropsig: 985 },
+    { position: 3, mdFt: 5500, tvdFt: 5500, kind: "ipo", portIn: 0.25, valveOdIn: 1.5, rRatio: null, tropsig: 960 },
+    { position: 4, mdFt: 6600, tvdFt: 6600, kind: "orifice", portIn: 0.25, valveOdIn: null, rRatio: null, tropsig: null },
+  ] as const;
+  await Mandrel.bulkCreate(valves.map((m) => ({ ...mandrelColumns(m), well_id: org.wellId, organization_id: org.organizationId })));
+  await writeFixture(org.wellId, fixture);
+  const mid = fixture.start + 45 * DAY;
+  await Issue.create({
+    organization_id: org.organizationId, well_id: org.wellId, rule: "heading", severity: 50, confidence: 0.8,
+    started_at: new Date(mid), last_seen_at: new Date(mid + DAY), ended_at: null, summary: "Tubing swings with a 90-minute period",
+  });
+  await Issue.create({
+    organization_id: org.organizationId, well_id: org.wellId, rule: "liquid_loading", status: "resolved", severity: 30, confidence: 0.6,
+    started_at: new Date(fixture.start - 30 * DAY), last_seen_at: new Date(fixture.start - 20 * DAY), ended_at: null, summary: "older, outside the range",
+  });
+  await FieldEvent.create({
+    organization_id: org.organizationId, pad_id: org.padId, kind: "injection_outage",
+    started_at: new Date(mid + 2 * DAY), ended_at: new Date(mid + 2 * DAY + 4 * 3600_000), well_count: 3, summary: "pad lost injection",
+  });
+}, 300_000);
+
+afterAll(async () => {
+  // 90 days of minute values are ~0.5 M rows: leave the shared test database as it was.
+  await getSamplePool().query("DELETE FROM samples WHERE well_id = $1", [org.wellId]);
+  await getSamplePool().query("DELETE FROM samples_15m WHERE well_id = $1", [org.wellId]);
+  await getSamplePool().end();
+  await closeDb();
+});
+
+describe("getTrendData", () => {
+  it("reduces 90 days to at most ~2,000 points per signal and keeps a one-minute spike (regression)", async () => {
+    const t0 = performance.now();
+    const d = await getTrendData(org.actors.engineer, org.wellId, { from: fixture.start, to: END, width: 1200 });
+    const ms = performance.now() - t0;
+    console.log(`[trends] 90 days × 5 signals, 1-minute data: ${ms.toFixed(0)} ms, bucket ${d.bucketMs / MINUTE} min`);
+    expect(d.resolution).toBe("minmax");
+    expect(d.series.map((s) => s.signal)).toEqual(["casing_pressure", "tubing_pressure", "injection_rate", "gas_rate", "liquid_rate"]);
+    for (const s of d.series) {
+      expect(s.t.length).toBeGreaterThan(100);
+      expect(s.t.length).toBeLessThanOrEqual(2010);
+      expect(s.v.length).toBe(s.t.length);
+      for (let i = 1; i < s.t.length; i++) expect(s.t[i]).toBeGreaterThan(s.t[i - 1]);
+    }
+    const casing = d.series.find((s) => s.signal === "casing_pressure")!;
+    const tubing = d.series.find((s) => s.signal === "tubing_pressure")!;
+    expect(Math.max(...casing.v.map((v) => v ?? -Infinity))).toBe(fixture.spikeValue);
+    expect(Math.min(...tubing.v.map((v) => v ?? Infinity))).toBe(fixture.dipValue);
+    // The spike sits in the bucket that holds its minute.
+    const i = casing.v.indexOf(fixture.spikeValue);
+    expect(Math.abs(casing.t[i] - fixture.spikeAt)).toBeLessThan(d.bucketMs);
+    expect(casing.unit).toBe("psig");
+  });
+
+  it("returns the stored values when zoomed in to two hours (regression)", async () => {
+    const from = fixture.spikeAt - 60 * MINUTE;
+    const to = fixture.spikeAt + 60 * MINUTE;
+    const d = await getTrendData(org.actors.analyst, org.wellId, { from, to, width: 1200, signals: ["casing_pressure", "liquid_rate"] });
+    expect(d.resolution).toBe("raw");
+    expect(d.bucketMs).toBe(0);
+    const casing = d.series[0];
+    expect(casing.t.length).toBe(121);
+    expect(casing.t[0]).toBe(from);
+    casing.t.forEach((t, k) => expect(casing.v[k]).toBeCloseTo(valueAt(fixture, "casing_pressure", t), 9));
+    expect(casing.v[60]).toBe(fixture.spikeValue);
+    expect(d.series[1].signal).toBe("liquid_rate");
+    expect(d.series[1].t.length).toBe(2); // hourly values at 12:00 and 13:00
+  });
+
+  it("uses min/max buckets from the samples for a medium range (regression)", async () => {
+    const d = await getTrendData(org.actors.engineer, org.wellId, { from: fixture.spikeAt - DAY, to: fixture.spikeAt + DAY, width: 1200 });
+    expect(d.resolution).toBe("minmax");
+    expect(d.bucketMs).toBe(5 * MINUTE);
+    const casing = d.series[0];
+    expect(casing.t.length).toBeLessThanOrEqual(2000);
+    expect(Math.max(...casing.v.map((v) => v ?? -Infinity))).toBe(fixture.spikeValue);
+  });
+
+  it("answers 404 for another organization's well", async () => {
+    const p = getTrendData(other.actors.engineer, org.wellId, { from: fixture.start, to: END });
+    await expect(p).rejects.toBeInstanceOf(AppError);
+    await expect(p).rejects.toMatchObject({ code: "not_found" });
+  });
+
+  it("refuses a reversed range", async () => {
+    await expect(getTrendData(org.actors.engineer, org.wellId, { from: END, to: END - DAY })).rejects.toMatchObject({ code: "invalid" });
+  });
+
+  it("draws the valve lines of valveSurfacePressures at the recent median tubing pressure", async () => {
+    const d = await getTrendData(org.actors.operator, org.wellId, { from: END - 7 * DAY, to: END });
+    const { tubingPsig, casingPsig } = d.overlays.recent;
+    // The median of a full sine over 6 hours sits at its centre line (150 and 960 psig).
+    expect(tubingPsig).toBeCloseTo(150, 0);
+    expect(casingPsig).toBeCloseTo(960, 0);
+    const design = (await getWell(org.actors.operator, org.wellId)).design;
+    const expected = valveSurfacePressures(design, tubingPsig!);
+    expect(d.overlays.valves.map((v) => [v.position, v.surfaceOpeningPsig, v.surfaceClosingPsig])).toEqual(
+      expected.map((v) => [v.position, v.surfaceOpeningPsig, v.surfaceClosingPsig]),
+    );
+    const v1 = d.overlays.valves[0];
+    expect(v1.surfaceOpeningPsig).not.toBeNull();
+    expect(v1.openLabel).toBe(formatValveLabel(1, "open", v1.surfaceOpeningPsig!));
+    expect(v1.openLabel).toMatch(/^V1 open [\d,]+ psig$/);
+    expect(d.overlays.valves[3]).toMatchObject({ kind: "orifice", surfaceOpeningPsig: null, openLabel: null });
+    expect(d.overlays.operatingPoint?.label).toMatch(/^Operating valve/);
+  });
+
+  it("lists the issues and pad field events overlapping the range", async () => {
+    const d = await getTrendData(org.actors.engineer, org.wellId, { from: fixture.start, to: END });
+    expect(d.overlays.issues.map((i) => [i.rule, i.label, i.end])).toEqual([["heading", "Heading", null]]);
+    expect(d.overlays.fieldEvents.map((e) => e.label)).toEqual(["Pad-wide injection outage"]);
+    const early = await getTrendData(org.actors.engineer, org.wellId, { from: fixture.start, to: fixture.start + DAY });
+    expect(early.overlays.issues).toEqual([]);
+    expect(early.overlays.fieldEvents).toEqual([]);
+  });
+});
