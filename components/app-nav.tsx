@@ -2,6 +2,7 @@ import Link from "next/link";
 import { Wordmark } from "./logo";
 import { can, ROLE_LABEL, type Role } from "@/lib/auth/roles";
 import { SignOutButton } from "./sign-out-button";
+import { NotificationBell } from "./notification-bell";
 
 interface NavItem { href: string; label: string; show: (r: Role) => boolean }
 
@@ -14,6 +15,7 @@ const ITEMS: NavItem[] = [
   { href: "/rules", label: "Rule settings", show: (r) => can(r, "rules.edit") },
   { href: "/admin/users", label: "People", show: (r) => can(r, "users.manage") },
   { href: "/admin/api-keys", label: "API keys", show: (r) => can(r, "apikeys.manage") },
+  { href: "/api-docs", label: "API", show: (r) => can(r, "uploads.create") },
 ];
 
 export function AppNav({ role, name, orgName }: { role: Role; name: string; orgName: string }) {
@@ -27,6 +29,7 @@ export function AppNav({ role, name, orgName }: { role: Role; name: string; orgN
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-3 text-xs text-ink-soft">
+          <NotificationBell />
           <Link href="/settings" className="hover:text-ink" data-testid="whoami">
             {name} · {ROLE_LABEL[role]} · {orgName}
           </Link>

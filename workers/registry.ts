@@ -1,5 +1,7 @@
 // Every queue the worker serves: add a processor here (one file per queue).
 import type { Job } from "bullmq";
+import { ingestProcessor } from "./ingest.worker";
+import { diagnoseProcessor } from "./diagnose.worker";
 
 export interface Processor {
   queue: string;
@@ -9,4 +11,5 @@ export interface Processor {
   onStart?: () => Promise<void>;
 }
 
-export const PROCESSORS: Processor[] = [];
+import { notifyProcessor } from "./notify.worker";
+export const PROCESSORS: Processor[] = [notifyProcessor, ingestProcessor, diagnoseProcessor];

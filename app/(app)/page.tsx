@@ -5,5 +5,6 @@ import { requirePageActor } from "@/lib/auth/session";
 export default async function Home() {
   const actor = await requirePageActor();
   if (actor.role === "admin") redirect("/admin/users");
-  redirect("/wells");
+  if (actor.role === "operator") redirect("/my-work");
+  redirect("/issues");
 }

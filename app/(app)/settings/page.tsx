@@ -2,6 +2,7 @@ import { requirePageActor } from "@/lib/auth/session";
 import { getOrgContext } from "@/lib/services/org/get-org-context";
 import { ROLE_LABEL } from "@/lib/auth/roles";
 import { UnitsForm } from "./units-form";
+import { NotificationPreferences } from "@/components/notification-preferences";
 
 export const metadata = { title: "Your settings" };
 
@@ -17,6 +18,7 @@ export default async function SettingsPage() {
         <p className="mb-3 text-xs text-ink-soft">Bellows stores one canonical set and converts for display. Oilfield: psig, ft, °F, Mscf/d, bbl/d. Metric: kPa(g), m, °C, e3m3/d, m3/d.</p>
         <UnitsForm current={ctx.unitSystem} />
       </section>
+      <NotificationPreferences />
     </div>
   );
 }
