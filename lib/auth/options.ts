@@ -3,6 +3,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { verifyCredentials } from "@/lib/services/auth/verify-credentials";
 import { isAppError } from "@/lib/errors";
 import type { Role } from "./roles";
+import { env } from "@/lib/env";
 
 function clientAddress(headers: Record<string, unknown> | undefined): string {
   const fwd = headers?.["x-forwarded-for"];
@@ -14,7 +15,7 @@ function clientAddress(headers: Record<string, unknown> | undefined): string {
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: 12 * 3600 },
   pages: { signIn: "/login" },
-  secret: process.env.NEXTAUTH_SECRET ?? "bellows-local-secret-change-me",
+  secret: env().NEXTAUTH_SECRET,
   providers: [
     CredentialsProvider({
       name: "E-mail and password",

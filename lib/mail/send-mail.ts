@@ -2,11 +2,12 @@
 // SMTP server is the local fake (scripts/mail-sink.ts); in production it is
 // whatever SMTP_URL names.
 import nodemailer, { type Transporter } from "nodemailer";
+import { env } from "@/lib/env";
 
 const g = globalThis as unknown as { __bellowsMail?: Transporter };
 
 function transport(): Transporter {
-  g.__bellowsMail ??= nodemailer.createTransport(process.env.SMTP_URL ?? "smtp://127.0.0.1:2525");
+  g.__bellowsMail ??= nodemailer.createTransport(env().SMTP_URL);
   return g.__bellowsMail;
 }
 
@@ -18,7 +19,7 @@ export interface Mail {
 
 export async function sendMail(mail: Mail): Promise<void> {
   await transport().sendMail({
-    from: process.env.MAIL_FROM ?? "Bellows <no-reply@bellows.test>",
+    from: env().MAIL_FROM,
     to: mail.to,
     subject: mail.subject,
     text: `${mail.text}\n\n--\nBellows gas-lift surveillance. Advisory only: field work follows your company's procedures, local regulations and licensed engineering judgment.\n`,
@@ -26,5 +27,5 @@ export async function sendMail(mail: Mail): Promise<void> {
 }
 
 export function appUrl(path: string): string {
-  return new URL(path, process.env.APP_URL ?? process.env.NEXTAUTH_URL ?? "http://localhost:3000").toString();
+  return new URL(path, env().APP_URL).toString();
 }

@@ -2,11 +2,12 @@
 // so an upload can answer clearly; workers wait forever (maxRetriesPerRequest
 // null, as BullMQ requires for blocking commands).
 import IORedis, { type RedisOptions } from "ioredis";
+import { env } from "@/lib/env";
 
 const g = globalThis as unknown as { __bellowsRedis?: IORedis };
 
 function redisUrl(): string {
-  return process.env.REDIS_URL ?? "redis://127.0.0.1:63790";
+  return env().REDIS_URL;
 }
 
 export function producerConnection(): IORedis {
