@@ -73,7 +73,9 @@ export function writeHeading(state: ScenarioState, from: number, to: number): vo
     const r = rise(i, from, 30) * (1 - rise(i, to - 30, 30));
     state.tubingFactor[i] *= 1 + a * r * wave(phase);
     state.gasFactor[i] *= 1 + 0.8 * a * r * wave(phase - 0.3);
-    state.liquidWave[i] *= 1 + 0.6 * a * r * wave(phase - 0.6);
+    // An unstable well also lifts less on average (our invented demo loss, half the
+    // swing amplitude), so heading carries a production cost like the other problems.
+    state.liquidWave[i] *= (1 - 0.5 * a * r) * (1 + 0.6 * a * r * wave(phase - 0.6));
     state.casingAdd[i] += cpAmp * r * wave(phase - Math.PI / 2);
   }
   label(state, "heading", from, to);

@@ -112,7 +112,7 @@ test("an analyst creates a well and imports its valve design from CSV", async ({
   await expect(mandrels.nth(0)).toContainText("Unloading valve (IPO)");
   await expect(mandrels.nth(2)).toContainText("Orifice");
   await expect(page.getByTestId("design-pressure-table")).toBeVisible();
-  await expect(page.getByRole("note")).toContainText("Advisory only");
+  await expect(page.getByRole("region", { name: "Design surface pressures" }).getByRole("note")).toContainText("Advisory only");
   await expect(page.locator("section#trends")).toHaveCount(1);
   await page.screenshot({ path: test.info().outputPath("well-page.png"), fullPage: true });
 });
