@@ -16,8 +16,10 @@ const EnvSchema = z.object({
 
 export type Env = z.infer<typeof EnvSchema>;
 
-let cached: Env | undefined;
+/**
+ * Parsed on every call (cheap; callers use it when they open a connection),
+ * so a process that changes its environment, as tests do, is seen at once.
+ */
 export function env(): Env {
-  cached ??= EnvSchema.parse(process.env);
-  return cached;
+  return EnvSchema.parse(process.env);
 }
