@@ -113,7 +113,6 @@ test("upload, rank, chart, assign, resolve on a phone, and the e-mails", async (
   await dialog.getByLabel("Priority").selectOption("high");
   await shot(engineer.page, "b3-assign-dialog.png");
   await dialog.getByRole("button", { name: "Assign", exact: true }).click();
-  await expect(engineer.page.getByRole("status").filter({ hasText: "Assigned" })).toBeVisible();
   await expect(engineer.page.getByTestId("issue-status").first()).toHaveText("Assigned");
 
   // (c) The operator, on a phone, finds it in My work and resolves it.
@@ -137,7 +136,6 @@ test("upload, rank, chart, assign, resolve on a phone, and the e-mails", async (
   await resolve.getByLabel("Note").fill("Opened the choke one step; tubing swings calmer after 30 min.");
   await shot(operator.page, "c2-resolve-phone.png");
   await resolve.getByRole("button", { name: "Resolve issue" }).click();
-  await expect(operator.page.getByRole("status").filter({ hasText: "Resolved" })).toBeVisible();
   await expect(operator.page.getByTestId("issue-status").first()).toHaveText("Resolved");
   await shot(operator.page, "c3-resolved-phone.png");
   await operator.context.close();
