@@ -6,7 +6,7 @@ set -euo pipefail
 export PROFILE=test
 source "$(dirname "$0")/env.sh"
 cd "$ROOT"
-export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-test-secret-not-for-production}"
+
 trap 'bash scripts/services.sh down >/dev/null 2>&1 || true' EXIT
 
 step() { log "── $* ──"; }
