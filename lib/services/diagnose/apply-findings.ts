@@ -238,8 +238,9 @@ function extendIssue(issue: Issue, w: { patch: Patch; events: PendingEvent[] }, 
   }
   const seen = (current("last_seen_at") as Date).getTime();
   // Only the newest view of the signature refreshes the words and the end state;
-  // a re-run over older data leaves them alone.
-  if (lastSeen >= seen) {
+  // a re-run over older data leaves them alone, and so does a run over a shorter
+  // window (the hourly sweep) that sees the same end but not the whole episode.
+  if (lastSeen > seen || (lastSeen === seen && f.start <= started)) {
     if (lastSeen > seen) setValue(issue, w.patch, "last_seen_at", new Date(lastSeen));
     setValue(issue, w.patch, "ended_at", isOngoing ? null : new Date(lastSeen));
     for (const [k, v] of Object.entries(findingValues(f))) setValue(issue, w.patch, k as keyof Patch, v as never);
