@@ -10,7 +10,7 @@ import { DiagnoseJobSchema, IngestJobSchema, QUEUES } from "@/lib/queue/jobs";
 import { getQueue } from "@/lib/queue/queues";
 import { IngestRefusedError, markUploadFailed, processUpload, UploadBusyError } from "@/lib/services/uploads/process-upload";
 import { requeueStuckUploads } from "@/lib/services/uploads/requeue-stuck-uploads";
-import { Upload } from "@/models";
+import { findUploadSubmitter, markUploadRetrying } from "@/lib/services/uploads/mark-upload-retrying";
 import type { Processor } from "./registry";
 
 const SWEEP_EVERY_MS = 60_000;
@@ -24,7 +24,6 @@ async function processIngestJob(job: Job): Promise<unknown> {
       onBatch: () => job.updateProgress(Date.now()).then(() => undefined),
     });
     if (result.status === "done" && result.wellIds && result.wellIds.length > 0) {
-      const upload = await Upload.findByPk(data.uploadId, { attributes: ["created_by"] });
       await getQueue(QUEUES.diagnose).add(
         "diagnose",
         DiagnoseJobSchema.parse({
@@ -34,7 +33,7 @@ async function processIngestJob(job: Job): Promise<unknown> {
           from: result.from,
           to: result.to,
           reason: "ingest",
-          requestedBy: upload?.created_by ?? null,
+          requestedBy: await findUploadSubmitter(data.uploadId),
         }),
       );
     }
@@ -49,7 +48,7 @@ async function processIngestJob(job: Job): Promise<unknown> {
     if (isLastAttempt) {
       await markUploadFailed(data.uploadId, `The import failed after ${job.attemptsMade + 1} tries: ${message}. The file is kept; submit it again once the problem is fixed.`);
     } else {
-      await Upload.update({ status: "queued", error: `Retrying after a problem: ${message}` }, { where: { id: data.uploadId, status: "processing" } });
+      await markUploadRetrying(data.uploadId, message);
     }
     throw e;
   }

@@ -4,7 +4,7 @@
 import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
 import { authOptions } from "./options";
-import { User } from "@/models";
+import { findActiveActor } from "@/lib/services/auth/find-active-actor";
 import type { Actor } from "./actor";
 import { can, type Capability } from "./roles";
 
@@ -12,9 +12,7 @@ export async function getActor(): Promise<Actor | null> {
   const session = await getServerSession(authOptions);
   const uid = session?.user?.id;
   if (!uid) return null;
-  const user = await User.findByPk(uid, { attributes: ["id", "organization_id", "role", "active"] });
-  if (!user || !user.active) return null;
-  return { userId: user.id, organizationId: user.organization_id, role: user.role };
+  return findActiveActor(uid);
 }
 
 /** For pages: send the signed-out to sign in, and the wrong role to a refusal page. */
