@@ -49,7 +49,3 @@ export const SIGNAL_LABEL: Record<Signal, string> = {
 export const SIGNAL_CODE: Record<Signal, number> = Object.fromEntries(
   SIGNALS.map((s, i) => [s, i + 1]),
 ) as Record<Signal, number>;
-
-export function signalFromCode(code: number): Signal | undefined {
-  return SIGNALS[code - 1];
-}

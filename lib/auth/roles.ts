@@ -34,7 +34,3 @@ export type Capability = keyof typeof CAPABILITIES;
 export function can(role: Role, capability: Capability): boolean {
   return (CAPABILITIES[capability] as readonly Role[]).includes(role);
 }
-
-export function rolesWith(capability: Capability): readonly Role[] {
-  return CAPABILITIES[capability];
-}

@@ -1,6 +1,5 @@
 // Failed sign-ins are limited per account and per network address in a fixed
 // window, so guessing one password or spraying many accounts both stop early.
-import { Op } from "sequelize";
 import { sequelize } from "@/models";
 
 export const SIGN_IN_LIMITS = {
@@ -44,11 +43,4 @@ export async function recordSignInFailure(email: string, address: string): Promi
 
 export async function clearSignInFailures(email: string): Promise<void> {
   await sequelize.query(`DELETE FROM sign_in_failures WHERE key = $1`, { bind: [`account:${email}`] });
-}
-
-/** Housekeeping for the worker's schedule. */
-export async function pruneSignInFailures(): Promise<void> {
-  await sequelize.getQueryInterface().bulkDelete("sign_in_failures", {
-    window_start: { [Op.lt]: new Date(Date.now() - 24 * 3600_000) },
-  });
 }

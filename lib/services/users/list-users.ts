@@ -9,10 +9,3 @@ export async function listUsers(actor: Actor): Promise<UserRow[]> {
   const rows = await User.findAll({ where: { organization_id: actor.organizationId }, order: [["name", "ASC"]] });
   return rows.map((u) => ({ id: u.id, email: u.email, name: u.name, role: u.role, active: u.active, hasPassword: !!u.password_hash }));
 }
-
-/** People of the organization with a given role, for assignment pickers. */
-export async function listPeopleByRole(actor: Actor, role: Role): Promise<{ id: number; name: string }[]> {
-  requireCapability(actor, "org.read");
-  const rows = await User.findAll({ where: { organization_id: actor.organizationId, role, active: true }, order: [["name", "ASC"]], attributes: ["id", "name"] });
-  return rows.map((u) => ({ id: u.id, name: u.name }));
-}

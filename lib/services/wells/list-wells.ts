@@ -1,5 +1,5 @@
 import { Op, type Order, type WhereOptions } from "sequelize";
-import { Field, Mandrel, Pad, Well, sequelize } from "@/models";
+import { Field, Pad, Well, sequelize } from "@/models";
 import { requireCapability, type Actor } from "@/lib/auth/actor";
 import { WellFilterSchema } from "@/lib/validations/well";
 import { parseOrThrow } from "@/lib/http";
@@ -27,7 +27,6 @@ export async function listWells(actor: Actor, rawFilter: unknown): Promise<WellS
     attributes: { include: [[sequelize.literal(`(SELECT count(*) FROM mandrels m WHERE m.well_id = "Well"."id")`), "mandrel_count"]] },
     order,
   });
-  void Mandrel;
   return rows.map((w) => {
     const pad = (w as unknown as { pad: Pad & { field: Field } }).pad;
     return {
