@@ -1,5 +1,6 @@
 // CSV quoting rules follow RFC 4180 §2 (quoted fields may hold the delimiter, line
 // breaks and doubled quotes). Line numbers and caps are our own contract.
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CsvTokenizer, tokenizeText, type CsvRecord } from "./csv-tokenizer";
 
@@ -78,5 +79,24 @@ describe("CsvTokenizer (RFC 4180 quoting)", () => {
     });
     expect(seen).toEqual([["a", "b"], ["1", "2"], ["3", "4"]]);
     expect(pushes).toBe(3);
+  });
+});
+
+describe("CsvTokenizer fast path (whole lines split natively)", () => {
+  // Property: a text fed whole (lines take the native fast path) and fed one
+  // character at a time (every line goes through the state machine) gives the same
+  // records, line numbers and flags: RFC 4180 §2 quoting, LF / CRLF / CR line ends.
+  const piece = fc.constantFrom("a", "1", "2.5", ",", ";", '"', "\n", "\r", "\r\n", " ", "x y", "");
+  it("gives the same records as the character-by-character path", () => {
+    fc.assert(
+      fc.property(fc.array(piece, { maxLength: 60 }), fc.constantFrom(",", ";"), fc.integer({ min: 1, max: 9 }), (parts, delim, size) => {
+        const text = parts.join("");
+        const whole = tokenizeText(text, delim, { maxFieldLength: 50 });
+        const pieces = tokenizeInPieces(text, delim, size);
+        const strip = (r: CsvRecord[]) => r.map((x) => ({ ...x }));
+        expect(strip(whole)).toEqual(strip(pieces));
+      }),
+      { numRuns: 3000 },
+    );
   });
 });

@@ -205,13 +205,24 @@ export function createTimeParser(format: TimeFormat, timeZone: string): TimePars
   const resolver = new ZoneResolver(timeZone);
   // Only ambiguous rows touch this map, so it stays tiny.
   const ambiguousState = new Map<string, { day: number; lastWall: number; isSecondPass: boolean }>();
+  // The last text and its time: a long-layout export repeats one timestamp for every
+  // tag of that minute. Only answers that do not depend on the series are kept
+  // (ambiguous fall-back times are not).
+  let lastRaw = "";
+  let lastT = TIME_UNPARSEABLE;
+  const remember = (raw: string, t: number): number => {
+    lastRaw = raw;
+    lastT = t;
+    return t;
+  };
   return (raw, seriesKey) => {
+    if (raw === lastRaw && lastRaw !== "") return lastT;
     const w = readWallTime(raw, format);
-    if (w === null) return TIME_UNPARSEABLE;
-    if (w.offsetMin !== null) return w.wall - w.offsetMin * 60_000;
+    if (w === null) return remember(raw, TIME_UNPARSEABLE);
+    if (w.offsetMin !== null) return remember(raw, w.wall - w.offsetMin * 60_000);
     const r = resolver.lookup(w.wall);
-    if (r.kind === "unique") return r.t;
-    if (r.kind === "nonexistent") return TIME_NONEXISTENT;
+    if (r.kind === "unique") return remember(raw, r.t);
+    if (r.kind === "nonexistent") return remember(raw, TIME_NONEXISTENT);
     const day = Math.floor(w.wall / DAY);
     const st = ambiguousState.get(seriesKey);
     if (st === undefined || st.day !== day) {

@@ -78,7 +78,8 @@ describe("readRows", () => {
     expect(summary.valuesAccepted).toBe(26);
     expect(summary.duplicatesMerged).toBe(1);
     const last = batches[2].values;
-    expect([...last.v]).toEqual([820, 821, 822, 823, 2, 1]);
+    // In key order (08:00 first), the repeat of 08:24 replaced 824.
+    expect([...last.v]).toEqual([1, 820, 821, 822, 823, 2]);
     // Upserting batches in order (last write wins) gives the file's last value for every key.
     const db = new Map<number, number>();
     for (const b of batches) for (let i = 0; i < b.values.length; i++) db.set(b.values.t[i], b.values.v[i]);

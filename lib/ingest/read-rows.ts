@@ -21,6 +21,7 @@
 // (a batch holds batchSize values, plus at most one wide row's worth), and refusal
 // details are kept for the first `rejectionDetailLimit` of each reason (all are counted).
 //
+// Each batch comes out in (well, signal, t) order (ValueBuffer.take).
 // Duplicates of (well, signal, t) are merged keeping the LAST value WITHIN a batch only,
 // so each batch can go to the database in one upsert statement (PostgreSQL's
 // INSERT … ON CONFLICT DO UPDATE refuses to touch the same row twice in one command).
@@ -37,7 +38,7 @@ import { classifyNonNumber, clip, describeNonNumber, describeOutOfRange, isInRan
 import { createTagResolver } from "./resolve-tag";
 import { decodeChunks } from "./decode-chunks";
 import { REJECT_REASONS, type Detection, type RejectReason, type Rejection } from "./types";
-import { ValueBuffer, type ValueColumns, type WellId } from "./value-buffer";
+import { ValueBuffer, type TakenValues, type ValueColumns, type WellId } from "./value-buffer";
 
 export type { ValueColumns, WellId };
 
@@ -162,17 +163,26 @@ export async function readRows<W extends WellId = number>(
       reject(line, column, raw, "out_of_range", describeOutOfRange(target.quantity, v));
       return;
     }
-    if (buffer.add(target.series, target.wellId, target.code, t, v)) {
-      counts.valuesAccepted++;
-      const span = counts.wells.get(target.wellId);
-      if (span === undefined) counts.wells.set(target.wellId, { first: t, last: t, values: 1 });
-      else {
-        if (t < span.first) span.first = t;
-        if (t > span.last) span.last = t;
-        span.values++;
+    buffer.add(target.series, target.wellId, target.code, t, v);
+  };
+
+  /** Count a taken batch: accepted values, merged repeats, and each well's span. */
+  const countBatch = (values: TakenValues<W>) => {
+    counts.valuesAccepted += values.length;
+    counts.duplicatesMerged += values.duplicates;
+    // The batch is in well order: one span look-up per run of a well.
+    let span: WellSpan | undefined;
+    let well: W | undefined;
+    for (let i = 0; i < values.length; i++) {
+      const t = values.t[i];
+      if (values.wellId[i] !== well || span === undefined) {
+        well = values.wellId[i];
+        span = counts.wells.get(well);
+        if (span === undefined) counts.wells.set(well, (span = { first: t, last: t, values: 0 }));
       }
-    } else {
-      counts.duplicatesMerged++;
+      if (t < span.first) span.first = t;
+      if (t > span.last) span.last = t;
+      span.values++;
     }
   };
 
@@ -297,7 +307,9 @@ export async function readRows<W extends WellId = number>(
   };
 
   const flush = async () => {
-    const batch: RowBatch<W> = { values: buffer.take(), rejections, counts };
+    const values = buffer.take();
+    countBatch(values);
+    const batch: RowBatch<W> = { values, rejections, counts };
     rejections = [];
     await onBatch(batch);
   };

@@ -41,7 +41,6 @@ export async function ingestSamples(actor: Actor, input: unknown): Promise<Inges
   const wells = await loadWellIndex(actor.organizationId);
   const buffer = new ValueBuffer<number>();
   const errors: SampleItemError[] = [];
-  let inBatchDuplicates = 0;
   const series = new Map<string, number>();
   let lo = Infinity;
   let hi = -Infinity;
@@ -65,18 +64,20 @@ export async function ingestSamples(actor: Actor, input: unknown): Promise<Inges
     const key = `${wellId}:${s.signal}`;
     let id = series.get(key);
     if (id === undefined) series.set(key, (id = series.size));
-    if (!buffer.add(id, wellId, SIGNAL_CODE[s.signal], t, v)) inBatchDuplicates++;
+    buffer.add(id, wellId, SIGNAL_CODE[s.signal], t, v);
     lo = Math.min(lo, t);
     hi = Math.max(hi, t);
     wellIds.add(wellId);
   });
 
-  if (buffer.length === 0 && errors.length > 0) throw new AppError("invalid", "No sample in the batch could be stored", errors.slice(0, 1000).map((e) => ({ path: `samples.${e.index}.${e.path}`, message: e.message })));
+  const values = buffer.take();
+  const inBatchDuplicates = values.duplicates;
+  if (values.length === 0 && errors.length > 0) throw new AppError("invalid", "No sample in the batch could be stored", errors.slice(0, 1000).map((e) => ({ path: `samples.${e.index}.${e.path}`, message: e.message })));
 
   const client = await getSamplePool().connect();
   let result;
   try {
-    result = await writeSampleBatch(client, buffer.take());
+    result = await writeSampleBatch(client, values);
   } finally {
     client.release();
   }

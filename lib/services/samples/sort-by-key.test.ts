@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { sortByKey } from "./sort-by-key";
+import { isSortedByKey, sortByKey } from "./sort-by-key";
 
 const batch = (rows: [number, number, number, number][]) => ({
   length: rows.length,
@@ -19,5 +19,18 @@ describe("sortByKey", () => {
     const got = Array.from({ length: out.length }, (_, i) => [out.wellId[i], out.signal[i], out.t[i], out.v[i]]);
     const want = [...rows].map((r) => [...r]).sort((a, b) => a[0] - b[0] || a[1] - b[1] || a[2] - b[2]);
     expect(got).toEqual(want);
+  });
+});
+
+describe("isSortedByKey", () => {
+  it.each([
+    ["sorted", [[1, 1, 1, 0], [1, 1, 2, 0], [1, 2, 0, 0], [2, 1, 0, 0]], true],
+    ["empty", [], true],
+    ["time goes back inside a series", [[1, 1, 2, 0], [1, 1, 1, 0]], false],
+    ["a repeated key", [[1, 1, 2, 0], [1, 1, 2, 5]], false],
+    ["signals out of order", [[1, 2, 0, 0], [1, 1, 5, 0]], false],
+    ["wells out of order", [[2, 1, 0, 0], [1, 1, 5, 0]], false],
+  ] as const)("%s", (_name, rows, want) => {
+    expect(isSortedByKey(batch(rows.map((r) => [...r] as [number, number, number, number])))).toBe(want);
   });
 });

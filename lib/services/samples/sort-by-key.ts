@@ -40,3 +40,16 @@ export function sortByKey(b: ValueColumns<number>): ValueColumns<number> {
   }
   return out;
 }
+
+/** True when the batch is already in strict (well_id, signal, t) order: sorted, no repeated key. */
+export function isSortedByKey(b: ValueColumns<number>): boolean {
+  for (let i = 1; i < b.length; i++) {
+    const dw = b.wellId[i] - b.wellId[i - 1];
+    if (dw > 0) continue;
+    if (dw < 0) return false;
+    const ds = b.signal[i] - b.signal[i - 1];
+    if (ds > 0) continue;
+    if (ds < 0 || b.t[i] <= b.t[i - 1]) return false;
+  }
+  return true;
+}

@@ -1,14 +1,16 @@
 // The one bulk write path for samples (file ingest and the JSON API). Per batch,
 // in one transaction:
 //   1. fast path: binary COPY straight into `samples` inside a savepoint. New data
-//      (the usual case) costs no more than a COPY into a keyed table;
+//      (the usual case) costs no more than a COPY into a keyed table, and the batch's
+//      15-minute summaries (computed here, summarize-buckets.ts) are folded into the
+//      stored rollup rows: counts and sums add, min/max and first/last by time combine;
 //   2. if any (well, signal, t) already exists the COPY fails with a unique
 //      violation; we roll back to the savepoint and take the merge path: binary
 //      COPY into a per-connection TEMP staging table, then
 //      INSERT … SELECT … ON CONFLICT (well_id, signal, t) DO UPDATE — the later
 //      value wins, identical values are not rewritten, so re-importing a file
-//      changes nothing;
-//   3. recompute the 15-minute rollup buckets of the touched series ranges.
+//      changes nothing — and the touched buckets are recomputed from `samples`
+//      (a replaced value cannot be folded in).
 //
 // The batch must hold each (well, signal, t) at most once (readRows and the API
 // service both merge in-batch duplicates first): PostgreSQL refuses to update one
@@ -20,7 +22,8 @@ import { from as copyFrom } from "pg-copy-streams";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { encodeCopyHeader, encodeCopyRows, encodeCopyTrailer } from "./encode-copy-binary";
 import { ensureSamplePartitions } from "./ensure-partitions";
-import { sortByKey } from "./sort-by-key";
+import { isSortedByKey, sortByKey } from "./sort-by-key";
+import { BUCKET_MS, summarizeBuckets } from "./summarize-buckets";
 
 export interface SampleWriteResult {
   /** Values written: new (well, signal, t) keys plus stored keys whose value differed and was replaced. */
@@ -29,7 +32,6 @@ export interface SampleWriteResult {
   unchanged: number;
 }
 
-const BUCKET_MS = 15 * 60_000;
 const staged = new WeakSet<pg.ClientBase>();
 const DEADLOCK = "40P01";
 const SERIALIZATION = "40001";
@@ -85,8 +87,8 @@ WHERE samples.v IS DISTINCT FROM EXCLUDED.v`;
 // samples in it. LATERAL makes it one index range scan per series (a plain join
 // let the planner merge-join the whole samples table: seconds per batch).
 const ROLLUP_SQL = `
-INSERT INTO samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast)
-SELECT r.well_id, r.signal, x.bucket, x.n, x.vmin, x.vmax, x.vsum, x.vfirst, x.vlast
+INSERT INTO samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast)
+SELECT r.well_id, r.signal, x.bucket, x.n, x.vmin, x.vmax, x.vsum, x.vfirst, x.vlast, x.tfirst, x.tlast
 FROM unnest($1::int[], $2::smallint[], $3::timestamptz[], $4::timestamptz[]) AS r(well_id, signal, lo, hi)
 CROSS JOIN LATERAL (
   SELECT date_bin('15 minutes', s.t, timestamptz '2000-01-01Z') AS bucket, count(*)::int AS n,
@@ -94,7 +96,8 @@ CROSS JOIN LATERAL (
          -- first/last value by time: min/max of [epoch seconds, v] pairs (arrays compare
          -- element by element); 30 % cheaper here than array_agg(v ORDER BY t)[1].
          (min(array[extract(epoch from s.t)::float8, s.v]))[2] AS vfirst,
-         (max(array[extract(epoch from s.t)::float8, s.v]))[2] AS vlast
+         (max(array[extract(epoch from s.t)::float8, s.v]))[2] AS vlast,
+         min(s.t) AS tfirst, max(s.t) AS tlast
   FROM samples s
   WHERE s.well_id = r.well_id AND s.signal = r.signal AND s.t >= r.lo AND s.t < r.hi
   GROUP BY 1
@@ -102,7 +105,28 @@ CROSS JOIN LATERAL (
 ORDER BY 1, 2, 3
 ON CONFLICT (well_id, signal, bucket) DO UPDATE
 SET n = EXCLUDED.n, vmin = EXCLUDED.vmin, vmax = EXCLUDED.vmax, vsum = EXCLUDED.vsum,
-    vfirst = EXCLUDED.vfirst, vlast = EXCLUDED.vlast`;
+    vfirst = EXCLUDED.vfirst, vlast = EXCLUDED.vlast, tfirst = EXCLUDED.tfirst, tlast = EXCLUDED.tlast`;
+
+// Fold a batch of NEW values into the rollup (valid only when the fast-path COPY
+// succeeded: no stored value was replaced). On conflict every expression reads the
+// stored row as it was, so the first/last swaps compare against the old times.
+// Times travel as epoch ms (float8) and become timestamptz here, exact to the µs.
+const FOLD_SQL = `
+INSERT INTO samples_15m AS r (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast)
+SELECT w, s, to_timestamp(b / 1000.0), n, lo, hi, su, vf, vl, to_timestamp(tf / 1000.0), to_timestamp(tl / 1000.0)
+FROM unnest($1::int[], $2::smallint[], $3::float8[], $4::int[], $5::float8[], $6::float8[], $7::float8[],
+            $8::float8[], $9::float8[], $10::float8[], $11::float8[]) AS x(w, s, b, n, lo, hi, su, tf, vf, tl, vl)
+ON CONFLICT (well_id, signal, bucket) DO UPDATE
+SET n = r.n + EXCLUDED.n, vmin = least(r.vmin, EXCLUDED.vmin), vmax = greatest(r.vmax, EXCLUDED.vmax),
+    vsum = r.vsum + EXCLUDED.vsum,
+    vfirst = CASE WHEN EXCLUDED.tfirst < r.tfirst THEN EXCLUDED.vfirst ELSE r.vfirst END,
+    vlast = CASE WHEN EXCLUDED.tlast > r.tlast THEN EXCLUDED.vlast ELSE r.vlast END,
+    tfirst = least(r.tfirst, EXCLUDED.tfirst), tlast = greatest(r.tlast, EXCLUDED.tlast)`;
+
+async function foldIntoRollup(client: pg.ClientBase, batch: ValueColumns<number>): Promise<void> {
+  const s = summarizeBuckets(batch);
+  await client.query(FOLD_SQL, [s.wellId, s.signal, s.bucket, s.n, s.vmin, s.vmax, s.vsum, s.tfirst, s.vfirst, s.tlast, s.vlast]);
+}
 
 interface SeriesRanges {
   wellIds: number[];
@@ -148,15 +172,28 @@ function codeOf(e: unknown): string | undefined {
   return (e as { code?: string }).code;
 }
 
-export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueColumns<number>, options: { maxAttempts?: number } = {}): Promise<SampleWriteResult> {
+export interface SampleWriteOptions {
+  maxAttempts?: number;
+  /**
+   * Commit without waiting for the WAL flush (synchronous_commit = off). Only for a
+   * caller that ends with a normal commit of its own before it reports success (the
+   * file import marks the upload done): that commit flushes the WAL up to itself,
+   * which covers every earlier batch, and a crash before it leaves the upload
+   * unfinished, so the job is retried and rewrites the same values.
+   */
+  isFlushDeferred?: boolean;
+}
+
+export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueColumns<number>, options: SampleWriteOptions = {}): Promise<SampleWriteResult> {
   if (unsorted.length === 0) return { written: 0, unchanged: 0 };
-  const batch = sortByKey(unsorted);
+  const batch = isSortedByKey(unsorted) ? unsorted : sortByKey(unsorted);
   const ranges = findSeriesRanges(batch);
   await ensureSamplePartitions(client, ranges.lo, ranges.hi);
   const maxAttempts = options.maxAttempts ?? 5;
   for (let attempt = 1; ; attempt++) {
     try {
       await client.query("BEGIN");
+      if (options.isFlushDeferred) await client.query("SET LOCAL synchronous_commit = off");
       // Serialise writers per series before touching anything. Without this, two
       // concurrent writers of the same 15-minute bucket would each recompute it from a
       // snapshot missing the other's rows, and the later commit would store a rollup
@@ -169,15 +206,16 @@ export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueCol
       try {
         await copyBatch(client, "samples", batch);
         written = batch.length;
+        await foldIntoRollup(client, batch);
       } catch (e) {
         if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
         await client.query("ROLLBACK TO SAVEPOINT fresh");
         await ensureStagingTable(client);
         await copyBatch(client, "ingest_stage", batch);
         written = (await client.query(UPSERT_SQL)).rowCount ?? 0;
+        // Nothing changed → no bucket changed; skip the rollup read.
+        if (written > 0) await client.query(ROLLUP_SQL, [ranges.wellIds, ranges.signals, ranges.los, ranges.his]);
       }
-      // Nothing changed → no bucket changed; skip the rollup read.
-      if (written > 0) await client.query(ROLLUP_SQL, [ranges.wellIds, ranges.signals, ranges.los, ranges.his]);
       await client.query("COMMIT");
       return { written, unchanged: batch.length - written };
     } catch (e) {

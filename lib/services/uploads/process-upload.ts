@@ -23,7 +23,9 @@ import { MappingSchema } from "@/lib/ingest/mapping";
 import type { Detection } from "@/lib/ingest/types";
 import { getStorage } from "@/lib/storage/get-storage";
 import { StorageNotFoundError } from "@/lib/storage/object-storage";
+import type pg from "pg";
 import { openSampleClient } from "@/lib/services/samples/sample-db";
+import { splitBySeries } from "@/lib/services/samples/split-by-series";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { createRejectionsWriter } from "./rejections-writer";
 import { loadWellIndex } from "./well-index";
@@ -58,6 +60,8 @@ export interface ProcessOptions {
   batchSize?: number;
   /** Called after each stored batch, e.g. to renew a job lock. */
   onBatch?: () => Promise<void> | void;
+  /** Database connections writing at once (default INGEST_WRITERS or 2). */
+  writers?: number;
 }
 
 // Advisory-lock namespace for uploads (any constant shared by all workers).
@@ -115,6 +119,11 @@ export async function processUpload(uploadId: number, organizationId: number, op
     let unchanged = 0;
     let lastProgressAt = Date.now();
     let inFlight: Promise<void> = Promise.resolve();
+    // Several connections write each batch at once, split by series: the keyed
+    // insert is the costliest step and PostgreSQL runs each connection on its own core.
+    const writerCount = Math.max(1, Math.min(8, options.writers ?? (Number(process.env.INGEST_WRITERS) || 2)));
+    const writers: pg.Client[] = [client];
+    for (let k = 1; k < writerCount; k++) writers.push(await openSampleClient());
     // Time the reader spent waiting for the database: near the total, the database
     // is the bottleneck; near zero, parsing is.
     let dbWaitMs = 0;
@@ -132,9 +141,15 @@ export async function processUpload(uploadId: number, organizationId: number, op
           const waitStart = performance.now();
           await inFlight;
           dbWaitMs += performance.now() - waitStart;
-          inFlight = writeSampleBatch(client, batch.values).then((r) => {
-            valuesStored += r.written;
-            unchanged += r.unchanged;
+          const parts = splitBySeries(batch.values, writers.length);
+          // allSettled: when one part fails the others still finish before the
+          // connections are closed, and no rejection is left unhandled.
+          inFlight = Promise.allSettled(parts.map((part, k) => writeSampleBatch(writers[k], part, { isFlushDeferred: true }))).then((results) => {
+            for (const r of results) {
+              if (r.status === "rejected") throw r.reason;
+              valuesStored += r.value.written;
+              unchanged += r.value.unchanged;
+            }
           });
           inFlight.catch(() => undefined); // awaited on the next batch or at the end
           await rejections.write(batch.rejections);
@@ -172,6 +187,7 @@ export async function processUpload(uploadId: number, organizationId: number, op
       throw e;
     } finally {
       source.destroy();
+      for (const w of writers.slice(1)) await w.end().catch(() => undefined);
     }
   } finally {
     // Ending the connection also releases the advisory lock.

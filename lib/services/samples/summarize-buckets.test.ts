@@ -1,0 +1,51 @@
+import { describe, expect, it } from "vitest";
+import { summarizeBuckets } from "./summarize-buckets";
+
+const MIN = 60_000;
+const T0 = Date.UTC(2026, 0, 5, 6, 0); // a bucket boundary (whole quarter hour)
+
+function batch(rows: [number, number, number, number][]) {
+  return {
+    length: rows.length,
+    wellId: rows.map((r) => r[0]),
+    signal: Uint8Array.from(rows.map((r) => r[1])),
+    t: Float64Array.from(rows.map((r) => r[2])),
+    v: Float64Array.from(rows.map((r) => r[3])),
+  };
+}
+
+// Expected values are the definitions of count, min, max, sum, first and last by time
+// over each 15-minute bin (common practice for time-series rollups), worked by hand.
+describe("summarizeBuckets", () => {
+  it("splits a series at quarter-hour boundaries and keeps first/last by time", () => {
+    const s = summarizeBuckets(batch([
+      [7, 1, T0, 10],
+      [7, 1, T0 + 5 * MIN, 4],
+      [7, 1, T0 + 14 * MIN, 12],
+      [7, 1, T0 + 15 * MIN, 3],
+      [7, 2, T0 + 1 * MIN, 100],
+      [8, 1, T0 + 1 * MIN, 50],
+    ]));
+    expect(s.wellId).toEqual([7, 7, 7, 8]);
+    expect(s.signal).toEqual([1, 1, 2, 1]);
+    expect(s.bucket).toEqual([T0, T0 + 15 * MIN, T0, T0]);
+    expect(s.n).toEqual([3, 1, 1, 1]);
+    expect(s.vmin).toEqual([4, 3, 100, 50]);
+    expect(s.vmax).toEqual([12, 3, 100, 50]);
+    expect(s.vsum).toEqual([26, 3, 100, 50]);
+    expect(s.tfirst).toEqual([T0, T0 + 15 * MIN, T0 + MIN, T0 + MIN]);
+    expect(s.vfirst).toEqual([10, 3, 100, 50]);
+    expect(s.tlast).toEqual([T0 + 14 * MIN, T0 + 15 * MIN, T0 + MIN, T0 + MIN]);
+    expect(s.vlast).toEqual([12, 3, 100, 50]);
+  });
+
+  it("bins times before 1970 and between minutes the same way (floor to the quarter hour)", () => {
+    const t = Date.UTC(1969, 11, 31, 23, 59, 30);
+    const s = summarizeBuckets(batch([[1, 1, t, 1]]));
+    expect(s.bucket).toEqual([Date.UTC(1969, 11, 31, 23, 45)]);
+  });
+
+  it("returns no rows for an empty batch", () => {
+    expect(summarizeBuckets(batch([])).n).toEqual([]);
+  });
+});
