@@ -220,7 +220,7 @@ async function main() {
   rmSync(dir, { recursive: true, force: true });
   if (!isKeep) {
     const ids = wells.map((w) => w.id);
-    await sequelize.query(`DELETE FROM samples WHERE well_id IN (:ids)`, { replacements: { ids } });
+    await sequelize.query(`DELETE FROM sample_blocks WHERE well_id IN (:ids)`, { replacements: { ids } });
     await sequelize.query(`DELETE FROM samples_15m WHERE well_id IN (:ids)`, { replacements: { ids } });
     for (const u of await Upload.findAll({ where: { organization_id: org.id } })) {
       await getStorage().delete(u.storage_key);

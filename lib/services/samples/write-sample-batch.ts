@@ -1,29 +1,27 @@
-// The one bulk write path for samples (file ingest and the JSON API). Per batch,
-// in one transaction:
-//   1. fast path: binary COPY straight into `samples` inside a savepoint. New data
-//      (the usual case) costs no more than a COPY into a keyed table, and the batch's
-//      15-minute summaries (computed here, summarize-buckets.ts) are folded into the
-//      stored rollup rows: counts and sums add, min/max and first/last by time combine;
-//   2. if any (well, signal, t) already exists the COPY fails with a unique
-//      violation; we roll back to the savepoint and take the merge path: binary
-//      COPY into a per-connection TEMP staging table, then
-//      INSERT … SELECT … ON CONFLICT (well_id, signal, t) DO UPDATE — the later
-//      value wins, identical values are not rewritten, so re-importing a file
-//      changes nothing — and the touched buckets are recomputed from `samples`
-//      (a replaced value cannot be folded in).
+// The one bulk write path for samples (file ingest and the JSON API). Samples are
+// stored as hour blocks (sample_blocks, migration 20261202000006). Per batch, in one
+// transaction, after taking a lock per series:
+//   1. find which of the batch's hour blocks are already stored (one index probe each);
+//   2. new hours: binary COPY of the blocks, and of their 15-minute rollup rows
+//      computed here (summarize-buckets.ts): an hour with no stored values has no
+//      rollup rows yet, so both are plain inserts, the cheapest write PostgreSQL has;
+//   3. stored hours: the batch's blocks go to a per-connection TEMP staging table and
+//      are merged into the stored ones by time: the later value of a time wins,
+//      identical values are not rewritten (so re-importing a file changes nothing and
+//      counts its values as unchanged), and the merged hours' rollup buckets are
+//      recomputed from the stored blocks.
 //
 // The batch must hold each (well, signal, t) at most once (readRows and the API
-// service both merge in-batch duplicates first): PostgreSQL refuses to update one
-// row twice in a single INSERT … ON CONFLICT, and COPY would fail on it.
-// Rows go in key order (faster B-tree inserts, see sort-by-key.ts, and two writers
-// take row locks in the same order); a deadlock that still happens is retried.
+// service both merge in-batch duplicates first). Rows go in key order; a deadlock
+// that still happens is retried.
 import type pg from "pg";
 import { from as copyFrom } from "pg-copy-streams";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
-import { encodeCopyHeader, encodeCopyRows, encodeCopyTrailer } from "./encode-copy-binary";
+import { encodeBlockRows, encodeCopyHeader, encodeCopyTrailer, encodeRollupRows } from "./encode-copy-binary";
 import { ensureSamplePartitions } from "./ensure-partitions";
+import { findBlocks, HOUR_MS, pickBlocks, type Blocks } from "./find-blocks";
 import { isSortedByKey, sortByKey } from "./sort-by-key";
-import { BUCKET_MS, summarizeBuckets } from "./summarize-buckets";
+import { summarizeBuckets } from "./summarize-buckets";
 
 export interface SampleWriteResult {
   /** Values written: new (well, signal, t) keys plus stored keys whose value differed and was replaced. */
@@ -36,24 +34,25 @@ const staged = new WeakSet<pg.ClientBase>();
 const DEADLOCK = "40P01";
 const SERIALIZATION = "40001";
 const UNIQUE_VIOLATION = "23505";
+const BLOCKS_PER_CHUNK = 256;
+const ROLLUP_ROWS_PER_CHUNK = 4096;
 
 async function ensureStagingTable(client: pg.ClientBase): Promise<void> {
   if (staged.has(client)) return;
   // ON COMMIT DELETE ROWS: the table empties itself at the end of every batch.
   await client.query(
-    `CREATE TEMP TABLE IF NOT EXISTS ingest_stage (well_id integer, signal smallint, t timestamptz, v double precision) ON COMMIT DELETE ROWS`,
+    `CREATE TEMP TABLE IF NOT EXISTS ingest_stage_blocks (well_id integer, signal smallint, hour timestamptz, ts timestamptz[], vs double precision[]) ON COMMIT DELETE ROWS`,
   );
   staged.add(client);
 }
 
-/** Binary COPY of the batch into a table, in chunks, with back-pressure. */
-async function copyBatch(client: pg.ClientBase, table: "samples" | "ingest_stage", b: ValueColumns<number>): Promise<void> {
-  const stream = client.query(copyFrom(`COPY ${table} (well_id, signal, t, v) FROM STDIN (FORMAT binary)`));
+/** Binary COPY of encoded pieces into a table, with back-pressure. */
+async function copyPieces(client: pg.ClientBase, sql: string, pieces: Iterable<Buffer>): Promise<void> {
+  const stream = client.query(copyFrom(sql));
   const done = new Promise<void>((resolve, reject) => {
     stream.on("finish", resolve);
     stream.on("error", reject);
   });
-  const CHUNK = 8192;
   const write = async (buf: Buffer) => {
     if (!stream.write(buf)) {
       await new Promise<void>((resolve, reject) => {
@@ -65,7 +64,7 @@ async function copyBatch(client: pg.ClientBase, table: "samples" | "ingest_stage
   };
   try {
     await write(encodeCopyHeader());
-    for (let start = 0; start < b.length; start += CHUNK) await write(encodeCopyRows(b, start, Math.min(b.length, start + CHUNK)));
+    for (const piece of pieces) await write(piece);
     stream.end(encodeCopyTrailer());
   } catch (e) {
     stream.destroy();
@@ -75,31 +74,68 @@ async function copyBatch(client: pg.ClientBase, table: "samples" | "ingest_stage
   await done;
 }
 
-// The WHERE skips identical values: no write, no WAL, and the statement's row count
-// is exactly the number of values written.
-const UPSERT_SQL = `
-INSERT INTO samples (well_id, signal, t, v)
-SELECT well_id, signal, t, v FROM ingest_stage
-ON CONFLICT (well_id, signal, t) DO UPDATE SET v = EXCLUDED.v
-WHERE samples.v IS DISTINCT FROM EXCLUDED.v`;
+function* blockPieces(batch: ValueColumns<number>, blocks: Blocks, which: readonly number[]): Generator<Buffer> {
+  for (let i = 0; i < which.length; i += BLOCKS_PER_CHUNK) yield encodeBlockRows(batch, blocks, which.slice(i, i + BLOCKS_PER_CHUNK));
+}
 
-// Recompute the rollup over each touched series' bucket range from all stored
-// samples in it. LATERAL makes it one index range scan per series (a plain join
-// let the planner merge-join the whole samples table: seconds per batch).
+function* rollupPieces(batch: ValueColumns<number>): Generator<Buffer> {
+  const s = summarizeBuckets(batch);
+  for (let i = 0; i < s.n.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeRollupRows(s, i, Math.min(s.n.length, i + ROLLUP_ROWS_PER_CHUNK));
+}
+
+// Which blocks are stored: LATERAL … LIMIT 1 keeps it one primary-key probe per
+// block (a join could be planned as a scan of the whole table).
+const STORED_SQL = `
+SELECT u.i::int AS i
+FROM unnest($1::int[], $2::smallint[], $3::float8[]) WITH ORDINALITY AS u(w, s, ms, i)
+CROSS JOIN LATERAL (
+  SELECT 1 FROM sample_blocks b WHERE b.well_id = u.w AND b.signal = u.s AND b.hour = to_timestamp(u.ms / 1000.0) LIMIT 1
+) x`;
+
+// Merge staged blocks into their stored hours. Per block: a full join of the two
+// (t, v) lists on t, the staged value winning; `changed` counts staged values that
+// were missing or different. Only blocks with a change are rewritten.
+const MERGE_SQL = `
+WITH m AS (
+  SELECT s.well_id, s.signal, s.hour, x.ts, x.vs, x.changed
+  FROM ingest_stage_blocks s
+  CROSS JOIN LATERAL (
+    SELECT b.ts, b.vs FROM sample_blocks b WHERE b.well_id = s.well_id AND b.signal = s.signal AND b.hour = s.hour LIMIT 1
+  ) b
+  CROSS JOIN LATERAL (
+    SELECT array_agg(u.t ORDER BY u.t) AS ts, array_agg(u.v ORDER BY u.t) AS vs,
+           (count(*) FILTER (WHERE u.is_staged AND u.old_v IS DISTINCT FROM u.v))::int AS changed
+    FROM (
+      SELECT coalesce(n.t, o.t) AS t, coalesce(n.v, o.v) AS v, n.t IS NOT NULL AS is_staged, o.v AS old_v
+      FROM unnest(s.ts, s.vs) AS n(t, v) FULL JOIN unnest(b.ts, b.vs) AS o(t, v) ON o.t = n.t
+    ) u
+  ) x
+), w AS (
+  INSERT INTO sample_blocks (well_id, signal, hour, ts, vs)
+  SELECT well_id, signal, hour, ts, vs FROM m WHERE changed > 0
+  ON CONFLICT (well_id, signal, hour) DO UPDATE SET ts = EXCLUDED.ts, vs = EXCLUDED.vs
+)
+SELECT coalesce(sum(changed), 0)::int AS written FROM m`;
+
+// Recompute the rollup buckets of some series ranges from the stored blocks, one
+// index range scan per range (LATERAL), pruned to the hours in range.
 const ROLLUP_SQL = `
 INSERT INTO samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast)
 SELECT r.well_id, r.signal, x.bucket, x.n, x.vmin, x.vmax, x.vsum, x.vfirst, x.vlast, x.tfirst, x.tlast
-FROM unnest($1::int[], $2::smallint[], $3::timestamptz[], $4::timestamptz[]) AS r(well_id, signal, lo, hi)
+FROM unnest($1::int[], $2::smallint[], $3::float8[], $4::float8[]) AS q(well_id, signal, lo_ms, hi_ms)
+CROSS JOIN LATERAL (SELECT q.well_id, q.signal, to_timestamp(q.lo_ms / 1000.0) AS lo, to_timestamp(q.hi_ms / 1000.0) AS hi) r
 CROSS JOIN LATERAL (
   SELECT date_bin('15 minutes', s.t, timestamptz '2000-01-01Z') AS bucket, count(*)::int AS n,
          min(s.v) AS vmin, max(s.v) AS vmax, sum(s.v) AS vsum,
          -- first/last value by time: min/max of [epoch seconds, v] pairs (arrays compare
-         -- element by element); 30 % cheaper here than array_agg(v ORDER BY t)[1].
+         -- element by element).
          (min(array[extract(epoch from s.t)::float8, s.v]))[2] AS vfirst,
          (max(array[extract(epoch from s.t)::float8, s.v]))[2] AS vlast,
          min(s.t) AS tfirst, max(s.t) AS tlast
-  FROM samples s
-  WHERE s.well_id = r.well_id AND s.signal = r.signal AND s.t >= r.lo AND s.t < r.hi
+  FROM sample_blocks b CROSS JOIN LATERAL unnest(b.ts, b.vs) AS s(t, v)
+  WHERE b.well_id = r.well_id AND b.signal = r.signal
+    AND b.hour >= date_bin('1 hour', r.lo, timestamptz '2000-01-01Z') AND b.hour < r.hi
+    AND s.t >= r.lo AND s.t < r.hi
   GROUP BY 1
 ) x
 ORDER BY 1, 2, 3
@@ -107,65 +143,31 @@ ON CONFLICT (well_id, signal, bucket) DO UPDATE
 SET n = EXCLUDED.n, vmin = EXCLUDED.vmin, vmax = EXCLUDED.vmax, vsum = EXCLUDED.vsum,
     vfirst = EXCLUDED.vfirst, vlast = EXCLUDED.vlast, tfirst = EXCLUDED.tfirst, tlast = EXCLUDED.tlast`;
 
-// Fold a batch of NEW values into the rollup (valid only when the fast-path COPY
-// succeeded: no stored value was replaced). On conflict every expression reads the
-// stored row as it was, so the first/last swaps compare against the old times.
-// Times travel as epoch ms (float8) and become timestamptz here, exact to the µs.
-const FOLD_SQL = `
-INSERT INTO samples_15m AS r (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast)
-SELECT w, s, to_timestamp(b / 1000.0), n, lo, hi, su, vf, vl, to_timestamp(tf / 1000.0), to_timestamp(tl / 1000.0)
-FROM unnest($1::int[], $2::smallint[], $3::float8[], $4::int[], $5::float8[], $6::float8[], $7::float8[],
-            $8::float8[], $9::float8[], $10::float8[], $11::float8[]) AS x(w, s, b, n, lo, hi, su, tf, vf, tl, vl)
-ON CONFLICT (well_id, signal, bucket) DO UPDATE
-SET n = r.n + EXCLUDED.n, vmin = least(r.vmin, EXCLUDED.vmin), vmax = greatest(r.vmax, EXCLUDED.vmax),
-    vsum = r.vsum + EXCLUDED.vsum,
-    vfirst = CASE WHEN EXCLUDED.tfirst < r.tfirst THEN EXCLUDED.vfirst ELSE r.vfirst END,
-    vlast = CASE WHEN EXCLUDED.tlast > r.tlast THEN EXCLUDED.vlast ELSE r.vlast END,
-    tfirst = least(r.tfirst, EXCLUDED.tfirst), tlast = greatest(r.tlast, EXCLUDED.tlast)`;
-
-async function foldIntoRollup(client: pg.ClientBase, batch: ValueColumns<number>): Promise<void> {
-  const s = summarizeBuckets(batch);
-  await client.query(FOLD_SQL, [s.wellId, s.signal, s.bucket, s.n, s.vmin, s.vmax, s.vsum, s.tfirst, s.vfirst, s.tlast, s.vlast]);
-}
-
-interface SeriesRanges {
+/** Per-series ranges (15-minute aligned, epoch ms) for ROLLUP_SQL. */
+interface Ranges {
   wellIds: number[];
   signals: number[];
-  los: Date[];
-  his: Date[];
-  /** One advisory-lock key per series (bigint form, apart from the two-integer upload locks), ascending. */
-  lockKeys: string[];
-  lo: number;
-  hi: number;
+  los: number[];
+  his: number[];
 }
 
-/** Per (well, signal): the 15-minute-aligned range the batch touches; and the batch's time span. */
-function findSeriesRanges(b: ValueColumns<number>): SeriesRanges {
-  const ranges = new Map<number, [number, number, number, number]>();
-  let lo = Infinity;
-  let hi = -Infinity;
-  for (let i = 0; i < b.length; i++) {
-    const t = b.t[i];
-    if (t < lo) lo = t;
-    if (t > hi) hi = t;
-    const key = b.wellId[i] * 64 + b.signal[i];
-    const r = ranges.get(key);
-    if (r === undefined) ranges.set(key, [b.wellId[i], b.signal[i], t, t]);
-    else {
-      if (t < r[2]) r[2] = t;
-      if (t > r[3]) r[3] = t;
-    }
+/** Each chosen block's hour as a range. */
+function hourRanges(blocks: Blocks, which: readonly number[]): Ranges {
+  const r: Ranges = { wellIds: [], signals: [], los: [], his: [] };
+  for (const k of which) {
+    r.wellIds.push(blocks.wellId[k]);
+    r.signals.push(blocks.signal[k]);
+    r.los.push(blocks.hour[k]);
+    r.his.push(blocks.hour[k] + HOUR_MS);
   }
-  const out: SeriesRanges = { wellIds: [], signals: [], los: [], his: [], lockKeys: [], lo, hi };
-  for (const [w, s, a, z] of ranges.values()) {
-    out.wellIds.push(w);
-    out.signals.push(s);
-    // Buckets are aligned to 2000-01-01 UTC, itself a multiple of 15 minutes from the Unix epoch.
-    out.los.push(new Date(Math.floor(a / BUCKET_MS) * BUCKET_MS));
-    out.his.push(new Date(Math.floor(z / BUCKET_MS) * BUCKET_MS + BUCKET_MS));
-  }
-  out.lockKeys = [...ranges.keys()].sort((x, y) => x - y).map(String);
-  return out;
+  return r;
+}
+
+/** One advisory-lock key per series (bigint form, apart from the two-integer upload locks), ascending. */
+function seriesLockKeys(blocks: Blocks): string[] {
+  const keys = new Set<number>();
+  for (let k = 0; k < blocks.length; k++) keys.add(blocks.wellId[k] * 64 + blocks.signal[k]);
+  return [...keys].sort((x, y) => x - y).map(String);
 }
 
 function codeOf(e: unknown): string | undefined {
@@ -184,38 +186,69 @@ export interface SampleWriteOptions {
   isFlushDeferred?: boolean;
 }
 
+/** New hours: COPY the blocks, then their rollup rows (recomputed instead if a stray bucket is in the way). */
+async function insertNewHours(client: pg.ClientBase, batch: ValueColumns<number>, blocks: Blocks, fresh: number[]): Promise<void> {
+  await copyPieces(client, "COPY sample_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, fresh));
+  const freshValues = fresh.length === blocks.length ? batch : pickBlocks(batch, blocks, fresh);
+  await client.query("SAVEPOINT rollup");
+  try {
+    await copyPieces(client, "COPY samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast) FROM STDIN (FORMAT binary)", rollupPieces(freshValues));
+  } catch (e) {
+    // A rollup row without stored values (left by a manual delete): rebuild those hours.
+    if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
+    await client.query("ROLLBACK TO SAVEPOINT rollup");
+    const r = hourRanges(blocks, fresh);
+    await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
+  }
+}
+
+/** Stored hours: stage the blocks, merge them in by time, recompute the merged hours' buckets. */
+async function mergeStoredHours(client: pg.ClientBase, batch: ValueColumns<number>, blocks: Blocks, stored: number[]): Promise<number> {
+  await ensureStagingTable(client);
+  await copyPieces(client, "COPY ingest_stage_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, stored));
+  const written = (await client.query<{ written: number }>(MERGE_SQL)).rows[0]?.written ?? 0;
+  // Nothing changed → no bucket changed; skip the rollup read.
+  if (written > 0) {
+    const r = hourRanges(blocks, stored);
+    await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
+  }
+  return written;
+}
+
 export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueColumns<number>, options: SampleWriteOptions = {}): Promise<SampleWriteResult> {
   if (unsorted.length === 0) return { written: 0, unchanged: 0 };
   const batch = isSortedByKey(unsorted) ? unsorted : sortByKey(unsorted);
-  const ranges = findSeriesRanges(batch);
-  await ensureSamplePartitions(client, ranges.lo, ranges.hi);
+  const blocks = findBlocks(batch);
+  const lockKeys = seriesLockKeys(blocks);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let k = 0; k < blocks.length; k++) {
+    lo = Math.min(lo, blocks.hour[k]);
+    hi = Math.max(hi, blocks.hour[k]);
+  }
+  await ensureSamplePartitions(client, lo, hi);
   const maxAttempts = options.maxAttempts ?? 5;
   for (let attempt = 1; ; attempt++) {
     try {
       await client.query("BEGIN");
       if (options.isFlushDeferred) await client.query("SET LOCAL synchronous_commit = off");
-      // Serialise writers per series before touching anything. Without this, two
-      // concurrent writers of the same 15-minute bucket would each recompute it from a
-      // snapshot missing the other's rows, and the later commit would store a rollup
-      // that lacks the earlier one's values. With it, the rollup statement below runs
-      // after every earlier writer of these series has committed, so it sees their rows.
-      // Keys are taken in ascending order, so two writers cannot deadlock on them.
-      await client.query("SELECT count(pg_advisory_xact_lock(k)) FROM unnest($1::bigint[]) AS k", [ranges.lockKeys]);
-      let written: number;
-      await client.query("SAVEPOINT fresh");
-      try {
-        await copyBatch(client, "samples", batch);
-        written = batch.length;
-        await foldIntoRollup(client, batch);
-      } catch (e) {
-        if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
-        await client.query("ROLLBACK TO SAVEPOINT fresh");
-        await ensureStagingTable(client);
-        await copyBatch(client, "ingest_stage", batch);
-        written = (await client.query(UPSERT_SQL)).rowCount ?? 0;
-        // Nothing changed → no bucket changed; skip the rollup read.
-        if (written > 0) await client.query(ROLLUP_SQL, [ranges.wellIds, ranges.signals, ranges.los, ranges.his]);
+      // Serialise writers per series before touching anything: two writers of the
+      // same hour would otherwise both see it missing and both insert it, or each
+      // rebuild a rollup bucket from a snapshot missing the other's values. Keys are
+      // taken in ascending order, so two writers cannot deadlock on them.
+      await client.query("SELECT count(pg_advisory_xact_lock(k)) FROM unnest($1::bigint[]) AS k", [lockKeys]);
+      const storedRows = (await client.query<{ i: number }>(STORED_SQL, [blocks.wellId, blocks.signal, blocks.hour])).rows;
+      const isStored = new Uint8Array(blocks.length);
+      for (const row of storedRows) isStored[row.i - 1] = 1;
+      const fresh: number[] = [];
+      const stored: number[] = [];
+      for (let k = 0; k < blocks.length; k++) (isStored[k] ? stored : fresh).push(k);
+      let written = 0;
+      if (fresh.length > 0) {
+        await insertNewHours(client, batch, blocks, fresh);
+        for (const k of fresh) written += blocks.end[k] - blocks.start[k];
       }
+      if (stored.length > 0) written += await mergeStoredHours(client, batch, blocks, stored);
       await client.query("COMMIT");
       return { written, unchanged: batch.length - written };
     } catch (e) {
@@ -229,3 +262,4 @@ export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueCol
     }
   }
 }
+

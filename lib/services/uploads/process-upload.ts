@@ -19,12 +19,14 @@
 import { Upload } from "@/models";
 import type { UploadCountsJson } from "@/models/upload";
 import { readRows, type ReadCounts } from "@/lib/ingest/read-rows";
+import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { MappingSchema } from "@/lib/ingest/mapping";
 import type { Detection } from "@/lib/ingest/types";
 import { getStorage } from "@/lib/storage/get-storage";
 import { StorageNotFoundError } from "@/lib/storage/object-storage";
 import type pg from "pg";
 import { openSampleClient } from "@/lib/services/samples/sample-db";
+import { OpenHourHolder } from "@/lib/services/samples/hold-open-hours";
 import { splitBySeries } from "@/lib/services/samples/split-by-series";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { createRejectionsWriter } from "./rejections-writer";
@@ -121,9 +123,22 @@ export async function processUpload(uploadId: number, organizationId: number, op
     let inFlight: Promise<void> = Promise.resolve();
     // Several connections write each batch at once, split by series: the keyed
     // insert is the costliest step and PostgreSQL runs each connection on its own core.
-    const writerCount = Math.max(1, Math.min(8, options.writers ?? (Number(process.env.INGEST_WRITERS) || 2)));
+    const writerCount = Math.max(1, Math.min(8, options.writers ?? (Number(process.env.INGEST_WRITERS) || 1)));
     const writers: pg.Client[] = [client];
     for (let k = 1; k < writerCount; k++) writers.push(await openSampleClient());
+    const hours = new OpenHourHolder();
+    const writeAll = (values: ValueColumns<number>): Promise<void> => {
+      const parts = splitBySeries(values, writers.length);
+      // allSettled: when one part fails the others still finish before the
+      // connections are closed, and no rejection is left unhandled.
+      return Promise.allSettled(parts.map((part, k) => writeSampleBatch(writers[k], part, { isFlushDeferred: true }))).then((results) => {
+        for (const r of results) {
+          if (r.status === "rejected") throw r.reason;
+          valuesStored += r.value.written;
+          unchanged += r.value.unchanged;
+        }
+      });
+    };
     // Time the reader spent waiting for the database: near the total, the database
     // is the bottleneck; near zero, parsing is.
     let dbWaitMs = 0;
@@ -141,16 +156,9 @@ export async function processUpload(uploadId: number, organizationId: number, op
           const waitStart = performance.now();
           await inFlight;
           dbWaitMs += performance.now() - waitStart;
-          const parts = splitBySeries(batch.values, writers.length);
-          // allSettled: when one part fails the others still finish before the
-          // connections are closed, and no rejection is left unhandled.
-          inFlight = Promise.allSettled(parts.map((part, k) => writeSampleBatch(writers[k], part, { isFlushDeferred: true }))).then((results) => {
-            for (const r of results) {
-              if (r.status === "rejected") throw r.reason;
-              valuesStored += r.value.written;
-              unchanged += r.value.unchanged;
-            }
-          });
+          const { ready, duplicates } = hours.next(batch.values);
+          unchanged += duplicates;
+          inFlight = writeAll(ready);
           inFlight.catch(() => undefined); // awaited on the next batch or at the end
           await rejections.write(batch.rejections);
           await options.onBatch?.();
@@ -166,6 +174,7 @@ export async function processUpload(uploadId: number, organizationId: number, op
         { batchSize: options.batchSize ?? 50_000, rejectionDetailLimit: 100_000, signal: options.signal },
       ).finally(() => inFlight.catch(() => undefined));
       await inFlight;
+      if (!summary.refusal) await writeAll(hours.flush());
       if (summary.refusal) {
         const where = summary.refusal.column ? ` (line ${summary.refusal.row}, column "${summary.refusal.column}")` : ` (line ${summary.refusal.row})`;
         throw new IngestRefusedError(`${upload.file_name}: ${summary.refusal.message}${where}. Fix the mapping and submit again.`);

@@ -113,8 +113,8 @@ describe("upload flow", () => {
       [Object.values(ids)],
     );
     expect(Number(rows[0].bad)).toBe(0);
-    const parts = await sql<{ name: string }>(`SELECT tableoid::regclass::text AS name FROM samples WHERE well_id = ANY($1) GROUP BY 1 ORDER BY 1`, [Object.values(ids)]);
-    expect(parts.map((p) => p.name)).toEqual(["samples_2026m11", "samples_2026m12"]);
+    const parts = await sql<{ name: string }>(`SELECT tableoid::regclass::text AS name FROM sample_blocks WHERE well_id = ANY($1) GROUP BY 1 ORDER BY 1`, [Object.values(ids)]);
+    expect(parts.map((p) => p.name)).toEqual(["sample_blocks_2026m11", "sample_blocks_2026m12"]);
   });
 
   it("the same file twice stores the same values and counts them as duplicates", async () => {
