@@ -80,13 +80,14 @@ async function prepare(): Promise<number> {
 
 function toColumns(wellId: number, series: ScenarioSeries): ValueColumns<number> {
   const n = series.t.length * SIGNALS.length;
-  const b: ValueColumns<number> = { length: 0, wellId: [], signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
+  const wellIds: number[] = [];
+  const b: ValueColumns<number> = { length: 0, wellId: wellIds, signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
   for (const [key, signal] of SIGNALS) {
     for (let i = 0; i < series.t.length; i++) {
       const v = series[key][i];
       if (!Number.isFinite(v)) continue;
       const k = b.length++;
-      b.wellId.push(wellId);
+      wellIds.push(wellId);
       b.signal[k] = SIGNAL_CODE[signal];
       b.t[k] = series.t[i];
       b.v[k] = v;

@@ -38,12 +38,4 @@ describe("ValueBuffer", () => {
     ]);
     expect(out.duplicates).toBe(2);
   });
-
-  it("orders string well keys too (tests and previews use names)", () => {
-    const b = new ValueBuffer<string>();
-    b.add(0, "W-2", 1, 1, 1);
-    b.add(1, "W-10", 1, 1, 2);
-    const out = b.take();
-    expect(out.wellId).toEqual(["W-10", "W-2"]);
-  });
 });

@@ -8,12 +8,14 @@
 // lib/services/samples/sort-by-key.ts), and in a historian file each series is
 // almost always in time order already, so grouping by series (a counting sort) and
 // checking that order is linear; a per-value Map cost more than the parsing.
-export type WellId = string | number;
+/** A well's database id. */
+export type WellId = number;
 
 /** Accepted values as parallel arrays: value i is (wellId[i], signal[i], t[i], v[i]). */
 export interface ValueColumns<W extends WellId> {
   length: number;
-  wellId: W[];
+  /** Typed arrays in practice (large plain arrays are slow to allocate); any indexable list is read. */
+  wellId: ArrayLike<W>;
   /** SIGNAL_CODE of each value (lib/signals.ts), as stored in the samples table. */
   signal: Uint8Array;
   /** Epoch milliseconds, UTC. */
@@ -27,18 +29,11 @@ export interface TakenValues<W extends WellId> extends ValueColumns<W> {
   duplicates: number;
 }
 
-function compareWells(a: WellId, b: WellId): number {
-  if (typeof a === "number" && typeof b === "number") return a - b;
-  const x = String(a);
-  const y = String(b);
-  return x < y ? -1 : x > y ? 1 : 0;
-}
-
 /** Growable parallel arrays for one batch. */
 export class ValueBuffer<W extends WellId> {
   length = 0;
   private series = new Int32Array(1024);
-  private wellId: W[] = [];
+  private wellId = new Int32Array(1024);
   private signal = new Uint8Array(1024);
   private t = new Float64Array(1024);
   private v = new Float64Array(1024);
@@ -51,7 +46,7 @@ export class ValueBuffer<W extends WellId> {
     if (this.length === this.t.length) this.grow();
     const i = this.length++;
     this.series[i] = series;
-    this.wellId.push(wellId);
+    this.wellId[i] = wellId;
     this.signal[i] = code;
     this.t[i] = t;
     this.v[i] = v;
@@ -60,6 +55,7 @@ export class ValueBuffer<W extends WellId> {
   private grow(): void {
     const n = this.t.length * 2;
     const r = new Int32Array(n); r.set(this.series); this.series = r;
+    const w = new Int32Array(n); w.set(this.wellId); this.wellId = w;
     const s = new Uint8Array(n); s.set(this.signal); this.signal = s;
     const t = new Float64Array(n); t.set(this.t); this.t = t;
     const v = new Float64Array(n); v.set(this.v); this.v = v;
@@ -82,7 +78,7 @@ export class ValueBuffer<W extends WellId> {
         present.push(s);
       }
     }
-    present.sort((a, b) => compareWells(wellId[firstAt[a]], wellId[firstAt[b]]) || signal[firstAt[a]] - signal[firstAt[b]]);
+    present.sort((a, b) => wellId[firstAt[a]] - wellId[firstAt[b]] || signal[firstAt[a]] - signal[firstAt[b]]);
     const next = new Int32Array(maxSeries + 1);
     let offset = 0;
     for (const s of present) {
@@ -92,7 +88,8 @@ export class ValueBuffer<W extends WellId> {
     const order = new Int32Array(n);
     for (let i = 0; i < n; i++) order[next[series[i]]++] = i;
 
-    const out: TakenValues<W> = { length: 0, duplicates: 0, wellId: [], signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
+    const outWell = new Int32Array(n);
+    const out: TakenValues<W> = { length: 0, duplicates: 0, wellId: outWell as unknown as ArrayLike<W>, signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
     let m = 0;
     let end = 0;
     for (const s of present) {
@@ -112,19 +109,20 @@ export class ValueBuffer<W extends WellId> {
           out.duplicates++; // a later value of the same key follows
           continue;
         }
-        out.wellId.push(wellId[i]);
+        outWell[m] = wellId[i];
         out.signal[m] = signal[i];
         out.t[m] = t[i];
         out.v[m] = v[i];
         m++;
       }
     }
+    // Views, not copies: a batch is short-lived, and fresh memory is the costly part.
     out.length = m;
-    out.signal = out.signal.slice(0, m);
-    out.t = out.t.slice(0, m);
-    out.v = out.v.slice(0, m);
+    out.wellId = outWell.subarray(0, m) as unknown as ArrayLike<W>;
+    out.signal = out.signal.subarray(0, m);
+    out.t = out.t.subarray(0, m);
+    out.v = out.v.subarray(0, m);
     this.length = 0;
-    this.wellId = [];
     return out;
   }
 }

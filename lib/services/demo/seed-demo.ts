@@ -193,14 +193,15 @@ const WRITERS = 3;
 
 function toColumns(wellId: number, series: ScenarioSeries): ValueColumns<number> {
   const n = series.t.length * SERIES_SIGNALS.length;
-  const out: ValueColumns<number> = { length: 0, wellId: [], signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
+  const wellIds: number[] = [];
+  const out: ValueColumns<number> = { length: 0, wellId: wellIds, signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
   for (const [key, signal] of SERIES_SIGNALS) {
     const values = series[key];
     for (let i = 0; i < series.t.length; i++) {
       const v = values[i];
       if (!Number.isFinite(v)) continue; // a gap in the scenario: nothing was read
       const k = out.length++;
-      out.wellId.push(wellId);
+      wellIds.push(wellId);
       out.signal[k] = SIGNAL_CODE[signal];
       out.t[k] = series.t[i];
       out.v[k] = v;

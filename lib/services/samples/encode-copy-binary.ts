@@ -33,20 +33,29 @@ export function encodeCopyTrailer(): Buffer {
 }
 
 /** A timestamptz value (without its length word): µs since 2000-01-01 as int64. */
-function writeTimestamp(b: Buffer, o: number, ms: number): number {
+function writeTimestamp(d: DataView, o: number, ms: number): number {
   // Split in two 32-bit halves (exact: |µs| stays far below 2^53 for any plausible date).
   const us = Math.round(ms - PG_EPOCH_MS) * 1000;
   const hi = Math.floor(us / TWO_32);
-  o = b.writeInt32BE(hi, o);
-  return b.writeUInt32BE(us - hi * TWO_32, o);
+  d.setInt32(o, hi);
+  d.setUint32(o + 4, us - hi * TWO_32);
+  return o + 8;
 }
 
-function writeArrayHeader(b: Buffer, o: number, oid: number, n: number): number {
-  o = b.writeInt32BE(1, o); // one dimension
-  o = b.writeInt32BE(0, o); // no NULL elements
-  o = b.writeInt32BE(oid, o);
-  o = b.writeInt32BE(n, o);
-  return b.writeInt32BE(1, o); // lower bound 1
+function writeArrayHeader(d: DataView, o: number, oid: number, n: number): number {
+  d.setInt32(o, 1); // one dimension
+  d.setInt32(o + 4, 0); // no NULL elements
+  d.setInt32(o + 8, oid);
+  d.setInt32(o + 12, n);
+  d.setInt32(o + 16, 1); // lower bound 1
+  return o + ARRAY_HEADER;
+}
+
+// DataView writes are big-endian by default, as COPY wants, and V8 compiles them to
+// plain stores (measured here: about twice as fast as Buffer's write methods).
+function int32(d: DataView, o: number, x: number): number {
+  d.setInt32(o, x);
+  return o + 4;
 }
 
 const blockBytes = (n: number) => 2 + (4 + 4) + (4 + 2) + (4 + 8) + 2 * (4 + ARRAY_HEADER + 12 * n);
@@ -56,29 +65,31 @@ export function encodeBlockRows(batch: ValueColumns<number>, blocks: Blocks, whi
   let size = 0;
   for (const k of which) size += blockBytes(blocks.end[k] - blocks.start[k]);
   const b = Buffer.allocUnsafe(size);
+  const d = new DataView(b.buffer, b.byteOffset, b.byteLength);
   let o = 0;
   for (const k of which) {
     const a = blocks.start[k];
     const z = blocks.end[k];
     const n = z - a;
-    o = b.writeInt16BE(5, o);
-    o = b.writeInt32BE(4, o);
-    o = b.writeInt32BE(blocks.wellId[k], o);
-    o = b.writeInt32BE(2, o);
-    o = b.writeInt16BE(blocks.signal[k], o);
-    o = b.writeInt32BE(8, o);
-    o = writeTimestamp(b, o, blocks.hour[k]);
-    o = b.writeInt32BE(ARRAY_HEADER + 12 * n, o);
-    o = writeArrayHeader(b, o, TIMESTAMPTZ_OID, n);
+    d.setInt16(o, 5);
+    o = int32(d, o + 2, 4);
+    o = int32(d, o, blocks.wellId[k]);
+    o = int32(d, o, 2);
+    d.setInt16(o, blocks.signal[k]);
+    o = int32(d, o + 2, 8);
+    o = writeTimestamp(d, o, blocks.hour[k]);
+    o = int32(d, o, ARRAY_HEADER + 12 * n);
+    o = writeArrayHeader(d, o, TIMESTAMPTZ_OID, n);
     for (let i = a; i < z; i++) {
-      o = b.writeInt32BE(8, o);
-      o = writeTimestamp(b, o, batch.t[i]);
+      o = int32(d, o, 8);
+      o = writeTimestamp(d, o, batch.t[i]);
     }
-    o = b.writeInt32BE(ARRAY_HEADER + 12 * n, o);
-    o = writeArrayHeader(b, o, FLOAT8_OID, n);
+    o = int32(d, o, ARRAY_HEADER + 12 * n);
+    o = writeArrayHeader(d, o, FLOAT8_OID, n);
     for (let i = a; i < z; i++) {
-      o = b.writeInt32BE(8, o);
-      o = b.writeDoubleBE(batch.v[i], o);
+      o = int32(d, o, 8);
+      d.setFloat64(o, batch.v[i]);
+      o += 8;
     }
   }
   return b;
@@ -86,29 +97,37 @@ export function encodeBlockRows(batch: ValueColumns<number>, blocks: Blocks, whi
 
 const ROLLUP_ROW_BYTES = 2 + (4 + 4) + (4 + 2) + (4 + 8) + (4 + 4) + 5 * (4 + 8) + 2 * (4 + 8);
 
+function float8(d: DataView, o: number, x: number): number {
+  d.setInt32(o, 8);
+  d.setFloat64(o + 4, x);
+  return o + 12;
+}
+
 /** Rows [start, end) of bucket summaries as samples_15m tuples
  * (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast). */
 export function encodeRollupRows(s: BucketSummaries, start: number, end: number): Buffer {
   const b = Buffer.allocUnsafe((end - start) * ROLLUP_ROW_BYTES);
+  const d = new DataView(b.buffer, b.byteOffset, b.byteLength);
   let o = 0;
   for (let k = start; k < end; k++) {
-    o = b.writeInt16BE(11, o);
-    o = b.writeInt32BE(4, o);
-    o = b.writeInt32BE(s.wellId[k], o);
-    o = b.writeInt32BE(2, o);
-    o = b.writeInt16BE(s.signal[k], o);
-    o = b.writeInt32BE(8, o);
-    o = writeTimestamp(b, o, s.bucket[k]);
-    o = b.writeInt32BE(4, o);
-    o = b.writeInt32BE(s.n[k], o);
-    for (const x of [s.vmin[k], s.vmax[k], s.vsum[k], s.vfirst[k], s.vlast[k]]) {
-      o = b.writeInt32BE(8, o);
-      o = b.writeDoubleBE(x, o);
-    }
-    o = b.writeInt32BE(8, o);
-    o = writeTimestamp(b, o, s.tfirst[k]);
-    o = b.writeInt32BE(8, o);
-    o = writeTimestamp(b, o, s.tlast[k]);
+    d.setInt16(o, 11);
+    o = int32(d, o + 2, 4);
+    o = int32(d, o, s.wellId[k]);
+    o = int32(d, o, 2);
+    d.setInt16(o, s.signal[k]);
+    o = int32(d, o + 2, 8);
+    o = writeTimestamp(d, o, s.bucket[k]);
+    o = int32(d, o, 4);
+    o = int32(d, o, s.n[k]);
+    o = float8(d, o, s.vmin[k]);
+    o = float8(d, o, s.vmax[k]);
+    o = float8(d, o, s.vsum[k]);
+    o = float8(d, o, s.vfirst[k]);
+    o = float8(d, o, s.vlast[k]);
+    o = int32(d, o, 8);
+    o = writeTimestamp(d, o, s.tfirst[k]);
+    o = int32(d, o, 8);
+    o = writeTimestamp(d, o, s.tlast[k]);
   }
   return b;
 }

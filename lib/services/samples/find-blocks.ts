@@ -41,11 +41,12 @@ export function findBlocks(b: ValueColumns<number>): Blocks {
 export function pickBlocks(b: ValueColumns<number>, blocks: Blocks, which: readonly number[]): ValueColumns<number> {
   let n = 0;
   for (const k of which) n += blocks.end[k] - blocks.start[k];
-  const out: ValueColumns<number> = { length: n, wellId: new Array<number>(n), signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
+  const wellIds = new Int32Array(n);
+  const out: ValueColumns<number> = { length: n, wellId: wellIds, signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
   let o = 0;
   for (const k of which) {
     for (let i = blocks.start[k]; i < blocks.end[k]; i++, o++) {
-      out.wellId[o] = b.wellId[i];
+      wellIds[o] = b.wellId[i];
       out.signal[o] = b.signal[i];
       out.t[o] = b.t[i];
       out.v[o] = b.v[i];

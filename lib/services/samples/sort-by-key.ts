@@ -20,7 +20,8 @@ export function sortByKey(b: ValueColumns<number>): ValueColumns<number> {
     g.push(i);
   }
   const keys = [...groups.keys()].sort((x, y) => x - y);
-  const out: ValueColumns<number> = { length: n, wellId: new Array<number>(n), signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
+  const wellIds = new Int32Array(n);
+  const out: ValueColumns<number> = { length: n, wellId: wellIds, signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
   let o = 0;
   for (const key of keys) {
     const g = groups.get(key)!;
@@ -31,7 +32,7 @@ export function sortByKey(b: ValueColumns<number>): ValueColumns<number> {
       }
     }
     for (const j of g) {
-      out.wellId[o] = b.wellId[j];
+      wellIds[o] = b.wellId[j];
       out.signal[o] = b.signal[j];
       out.t[o] = b.t[j];
       out.v[o] = b.v[j];

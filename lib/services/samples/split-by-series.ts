@@ -14,11 +14,11 @@ export function splitBySeries(b: ValueColumns<number>, parts: number): ValueColu
   const which = new Uint8Array(b.length);
   const sizes = new Array<number>(parts).fill(0);
   for (let i = 0; i < b.length; i++) sizes[(which[i] = partOfSeries(b.wellId[i], b.signal[i], parts))]++;
-  const out = sizes.map((n) => ({ length: 0, wellId: new Array<number>(), signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) }));
+  const out = sizes.map((n) => ({ length: 0, wellId: new Int32Array(n), signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) }));
   for (let i = 0; i < b.length; i++) {
     const o = out[which[i]];
     const k = o.length++;
-    o.wellId.push(b.wellId[i]);
+    o.wellId[k] = b.wellId[i];
     o.signal[k] = b.signal[i];
     o.t[k] = b.t[i];
     o.v[k] = b.v[i];

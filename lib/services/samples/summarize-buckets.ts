@@ -1,55 +1,60 @@
 // The 15-minute rollup rows of one key-sorted batch, computed in one pass: a batch
 // sorted by (well_id, signal, t) holds each series' buckets back to back.
-// Used when every value of the batch is new, so each bucket's summary can be
-// folded into the stored one (see write-sample-batch.ts) instead of re-reading
-// the bucket's samples from the table.
+// Used for hours with no stored values yet (see write-sample-batch.ts), whose
+// rollup rows can then be inserted as they are.
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 
 export const BUCKET_MS = 15 * 60_000;
 
-/** One row per (well, signal, bucket), as parallel arrays ready for unnest(). */
+/** One row per (well, signal, bucket), as parallel typed arrays. */
 export interface BucketSummaries {
-  wellId: number[];
-  signal: number[];
+  length: number;
+  wellId: Int32Array;
+  signal: Uint8Array;
   /** Bucket start, epoch ms (multiples of 15 minutes from the Unix epoch, as 2000-01-01 UTC is). */
-  bucket: number[];
-  n: number[];
-  vmin: number[];
-  vmax: number[];
-  vsum: number[];
-  tfirst: number[];
-  vfirst: number[];
-  tlast: number[];
-  vlast: number[];
+  bucket: Float64Array;
+  n: Int32Array;
+  vmin: Float64Array;
+  vmax: Float64Array;
+  vsum: Float64Array;
+  tfirst: Float64Array;
+  vfirst: Float64Array;
+  tlast: Float64Array;
+  vlast: Float64Array;
 }
+
+const bucketOf = (t: number) => Math.floor(t / BUCKET_MS) * BUCKET_MS;
+
+const isNewBucket = (b: ValueColumns<number>, i: number) =>
+  i === 0 || b.wellId[i] !== b.wellId[i - 1] || b.signal[i] !== b.signal[i - 1] || bucketOf(b.t[i]) !== bucketOf(b.t[i - 1]);
 
 /** Summaries of a batch sorted by (well_id, signal, t) with unique keys. */
 export function summarizeBuckets(b: ValueColumns<number>): BucketSummaries {
-  const out: BucketSummaries = { wellId: [], signal: [], bucket: [], n: [], vmin: [], vmax: [], vsum: [], tfirst: [], vfirst: [], tlast: [], vlast: [] };
+  // Count first, so the columns are allocated once at their size.
+  let m = 0;
+  for (let i = 0; i < b.length; i++) if (isNewBucket(b, i)) m++;
+  const out: BucketSummaries = {
+    length: m, wellId: new Int32Array(m), signal: new Uint8Array(m), bucket: new Float64Array(m), n: new Int32Array(m),
+    vmin: new Float64Array(m), vmax: new Float64Array(m), vsum: new Float64Array(m),
+    tfirst: new Float64Array(m), vfirst: new Float64Array(m), tlast: new Float64Array(m), vlast: new Float64Array(m),
+  };
   let k = -1;
-  let w = NaN;
-  let s = NaN;
-  let bucket = NaN;
   for (let i = 0; i < b.length; i++) {
     const t = b.t[i];
     const v = b.v[i];
-    const start = Math.floor(t / BUCKET_MS) * BUCKET_MS;
-    if (b.wellId[i] !== w || b.signal[i] !== s || start !== bucket) {
-      w = b.wellId[i];
-      s = b.signal[i];
-      bucket = start;
+    if (isNewBucket(b, i)) {
       k++;
-      out.wellId.push(w);
-      out.signal.push(s);
-      out.bucket.push(start);
-      out.n.push(1);
-      out.vmin.push(v);
-      out.vmax.push(v);
-      out.vsum.push(v);
-      out.tfirst.push(t);
-      out.vfirst.push(v);
-      out.tlast.push(t);
-      out.vlast.push(v);
+      out.wellId[k] = b.wellId[i];
+      out.signal[k] = b.signal[i];
+      out.bucket[k] = bucketOf(t);
+      out.n[k] = 1;
+      out.vmin[k] = v;
+      out.vmax[k] = v;
+      out.vsum[k] = v;
+      out.tfirst[k] = t;
+      out.vfirst[k] = v;
+      out.tlast[k] = t;
+      out.vlast[k] = v;
       continue;
     }
     out.n[k]++;

@@ -80,7 +80,7 @@ function* blockPieces(batch: ValueColumns<number>, blocks: Blocks, which: readon
 
 function* rollupPieces(batch: ValueColumns<number>): Generator<Buffer> {
   const s = summarizeBuckets(batch);
-  for (let i = 0; i < s.n.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeRollupRows(s, i, Math.min(s.n.length, i + ROLLUP_ROWS_PER_CHUNK));
+  for (let i = 0; i < s.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeRollupRows(s, i, Math.min(s.length, i + ROLLUP_ROWS_PER_CHUNK));
 }
 
 // Which blocks are stored: LATERAL … LIMIT 1 keeps it one primary-key probe per

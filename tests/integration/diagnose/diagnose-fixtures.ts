@@ -29,14 +29,15 @@ export async function addScenarioWell(organizationId: number, padId: number, sce
 /** Write the values of [from, to) of a scenario series for one well. */
 export async function writeSeries(wellId: number, series: ScenarioSeries, from = -Infinity, to = Infinity): Promise<number> {
   const n = series.t.length * SIGNALS.length;
-  const b: ValueColumns<number> = { length: 0, wellId: [], signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
+  const wellIds: number[] = [];
+  const b: ValueColumns<number> = { length: 0, wellId: wellIds, signal: new Uint8Array(n), t: new Float64Array(n), v: new Float64Array(n) };
   for (const [key, signal] of SIGNALS) {
     for (let i = 0; i < series.t.length; i++) {
       const t = series.t[i];
       const v = series[key][i];
       if (t < from || t >= to || !Number.isFinite(v)) continue;
       const k = b.length++;
-      b.wellId.push(wellId);
+      wellIds.push(wellId);
       b.signal[k] = SIGNAL_CODE[signal];
       b.t[k] = t;
       b.v[k] = v;
