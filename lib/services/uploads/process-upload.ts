@@ -18,18 +18,17 @@
 // - rejectedByReason: refused cells and rows by reason (details in the rejections CSV).
 import { Upload } from "@/models";
 import type { UploadCountsJson } from "@/models/upload";
-import { readRows, type ReadCounts } from "@/lib/ingest/read-rows";
+import { readRows, type ReadCounts, type RowBatch } from "@/lib/ingest/read-rows";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { MappingSchema } from "@/lib/ingest/mapping";
 import type { Detection } from "@/lib/ingest/types";
 import { getStorage } from "@/lib/storage/get-storage";
 import { StorageNotFoundError } from "@/lib/storage/object-storage";
-import type pg from "pg";
 import { openSampleClient } from "@/lib/services/samples/sample-db";
 import { OpenHourHolder } from "@/lib/services/samples/hold-open-hours";
-import { splitBySeries } from "@/lib/services/samples/split-by-series";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { createRejectionsWriter } from "./rejections-writer";
+import { isParseThreadWanted, readRowsInThread } from "./read-rows-in-thread";
 import { loadWellIndex } from "./well-index";
 
 /** A problem with the file or its mapping: retrying will not help. */
@@ -62,8 +61,6 @@ export interface ProcessOptions {
   batchSize?: number;
   /** Called after each stored batch, e.g. to renew a job lock. */
   onBatch?: () => Promise<void> | void;
-  /** Database connections writing at once (default INGEST_WRITERS or 2). */
-  writers?: number;
 }
 
 // Advisory-lock namespace for uploads (any constant shared by all workers).
@@ -121,57 +118,45 @@ export async function processUpload(uploadId: number, organizationId: number, op
     let unchanged = 0;
     let lastProgressAt = Date.now();
     let inFlight: Promise<void> = Promise.resolve();
-    // Several connections write each batch at once, split by series: the keyed
-    // insert is the costliest step and PostgreSQL runs each connection on its own core.
-    const writerCount = Math.max(1, Math.min(8, options.writers ?? (Number(process.env.INGEST_WRITERS) || 1)));
-    const writers: pg.Client[] = [client];
-    for (let k = 1; k < writerCount; k++) writers.push(await openSampleClient());
     const hours = new OpenHourHolder();
-    const writeAll = (values: ValueColumns<number>): Promise<void> => {
-      const parts = splitBySeries(values, writers.length);
-      // allSettled: when one part fails the others still finish before the
-      // connections are closed, and no rejection is left unhandled.
-      return Promise.allSettled(parts.map((part, k) => writeSampleBatch(writers[k], part, { isFlushDeferred: true }))).then((results) => {
-        for (const r of results) {
-          if (r.status === "rejected") throw r.reason;
-          valuesStored += r.value.written;
-          unchanged += r.value.unchanged;
-        }
+    const writeAll = (values: ValueColumns<number>): Promise<void> =>
+      writeSampleBatch(client, values, { isFlushDeferred: true }).then((r) => {
+        valuesStored += r.written;
+        unchanged += r.unchanged;
       });
-    };
     // Time the reader spent waiting for the database: near the total, the database
     // is the bottleneck; near zero, parsing is.
     let dbWaitMs = 0;
     const startedAt = performance.now();
 
     try {
-      const summary = await readRows<number>(
-        countBytes(source, (n) => (bytesRead += n)),
-        detection,
-        parsed.data,
-        (key) => wells.resolve(key),
-        async (batch) => {
-          // Pipelined: the database writes this batch while readRows parses the next
-          // (at most one write in flight, so at most two batches in memory).
-          const waitStart = performance.now();
-          await inFlight;
-          dbWaitMs += performance.now() - waitStart;
-          const { ready, duplicates } = hours.next(batch.values);
-          unchanged += duplicates;
-          inFlight = writeAll(ready);
-          inFlight.catch(() => undefined); // awaited on the next batch or at the end
-          await rejections.write(batch.rejections);
-          await options.onBatch?.();
-          if (Date.now() - lastProgressAt >= PROGRESS_EVERY_MS) {
-            lastProgressAt = Date.now();
-            await upload.update({
-              progress: Math.min(0.99, bytesRead / byteSize),
-              bytes_processed: bytesRead,
-              counts: toCountsJson(batch.counts, valuesStored, unchanged),
-            });
-          }
-        },
-        { batchSize: options.batchSize ?? 50_000, rejectionDetailLimit: 100_000, signal: options.signal },
+      const onBatch = async (batch: RowBatch<number>) => {
+        // Pipelined: the database writes this batch while the rows of the next are
+        // parsed (on the parse thread, or here when it is off). At most one write is in
+        // flight, so at most two batches (three with the thread's) are in memory.
+        const waitStart = performance.now();
+        await inFlight;
+        dbWaitMs += performance.now() - waitStart;
+        const { ready, duplicates } = hours.next(batch.values);
+        unchanged += duplicates;
+        inFlight = writeAll(ready);
+        inFlight.catch(() => undefined); // awaited on the next batch or at the end
+        await rejections.write(batch.rejections);
+        await options.onBatch?.();
+        if (Date.now() - lastProgressAt >= PROGRESS_EVERY_MS) {
+          lastProgressAt = Date.now();
+          await upload.update({
+            progress: Math.min(0.99, bytesRead / byteSize),
+            bytes_processed: bytesRead,
+            counts: toCountsJson(batch.counts, valuesStored, unchanged),
+          });
+        }
+      };
+      const readOptions = { batchSize: options.batchSize ?? 50_000, rejectionDetailLimit: 100_000, signal: options.signal };
+      const input = countBytes(source, (n) => (bytesRead += n));
+      const summary = await (isParseThreadWanted()
+        ? readRowsInThread(input, detection, parsed.data, wells.table, onBatch, readOptions)
+        : readRows<number>(input, detection, parsed.data, (key) => wells.resolve(key), onBatch, readOptions)
       ).finally(() => inFlight.catch(() => undefined));
       await inFlight;
       if (!summary.refusal) await writeAll(hours.flush());
@@ -196,7 +181,6 @@ export async function processUpload(uploadId: number, organizationId: number, op
       throw e;
     } finally {
       source.destroy();
-      for (const w of writers.slice(1)) await w.end().catch(() => undefined);
     }
   } finally {
     // Ending the connection also releases the advisory lock.

@@ -2,13 +2,12 @@
 // registered wells of one organization. Matching ignores case and repeated spaces;
 // the person's explicit matches from submitUpload win over the register.
 import { Well } from "@/models";
+import { createWellKeyResolver, normaliseWellKey, type WellKeyTable } from "@/lib/ingest/well-keys";
 
 export interface WellIndex {
   resolve(key: string): number | undefined;
-}
-
-export function normaliseWellKey(key: string): string {
-  return key.trim().replace(/\s+/g, " ").toLowerCase();
+  /** The look-up tables, for a parser running elsewhere (the parse thread). */
+  table: WellKeyTable;
 }
 
 export async function loadWellIndex(organizationId: number, matches: Record<string, number> = {}): Promise<WellIndex> {
@@ -23,12 +22,9 @@ export async function loadWellIndex(organizationId: number, matches: Record<stri
     if (nameCount.get(n) === 1 && !byKey.has(n)) byKey.set(n, w.id);
   }
   for (const w of wells) byKey.set(normaliseWellKey(w.uwi), w.id);
-  const explicit = new Map<string, number>();
-  for (const [k, id] of Object.entries(matches)) explicit.set(normaliseWellKey(k), id);
-  return {
-    resolve(key) {
-      const k = normaliseWellKey(key);
-      return explicit.get(k) ?? byKey.get(k);
-    },
+  const table: WellKeyTable = {
+    byKey: [...byKey],
+    explicit: Object.entries(matches).map(([k, id]) => [normaliseWellKey(k), id]),
   };
+  return { resolve: createWellKeyResolver(table), table };
 }
