@@ -20,6 +20,10 @@ type ThreadMessage =
 
 const THREAD_FILE = path.join(__dirname, "..", "..", "..", "workers", "parse-rows.thread.cjs");
 
+function ownsItsMemory(b: Uint8Array): boolean {
+  return b.byteOffset === 0 && b.buffer.byteLength === b.byteLength && b.buffer instanceof ArrayBuffer;
+}
+
 export function isParseThreadWanted(): boolean {
   return process.env.INGEST_PARSE_THREAD !== "0";
 }
@@ -52,9 +56,10 @@ export async function readRowsInThread(
       if (m.type === "pull") {
         hasStarted = true;
         const r = await chunks.next();
-        // A copy: the stream's chunk may share its memory with other chunks.
-        const chunk = r.done ? null : new Uint8Array(r.value);
-        worker.postMessage({ type: "chunk", chunk }, chunk ? [chunk.buffer] : []);
+        // Handed over without a copy when the chunk owns its whole memory (a file
+        // stream's large reads do); copied when it may share it with other buffers.
+        const chunk = r.done ? null : ownsItsMemory(r.value) ? r.value : new Uint8Array(r.value);
+        worker.postMessage({ type: "chunk", chunk }, chunk ? [chunk.buffer as ArrayBuffer] : []);
       } else if (m.type === "batch") {
         await onBatch(m.batch);
         worker.postMessage({ type: "ack" });
