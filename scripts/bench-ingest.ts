@@ -221,7 +221,9 @@ async function main() {
   if (!isKeep) {
     const ids = wells.map((w) => w.id);
     await sequelize.query(`DELETE FROM sample_blocks WHERE well_id IN (:ids)`, { replacements: { ids } });
-    await sequelize.query(`DELETE FROM samples_15m WHERE well_id IN (:ids)`, { replacements: { ids } });
+    for (const table of ["samples_15m", "samples_1h", "sample_series_versions"]) {
+      await sequelize.query(`DELETE FROM ${table} WHERE well_id IN (:ids)`, { replacements: { ids } });
+    }
     for (const u of await Upload.findAll({ where: { organization_id: org.id } })) {
       await getStorage().delete(u.storage_key);
       if (u.rejections_key) await getStorage().delete(u.rejections_key);

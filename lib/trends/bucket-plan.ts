@@ -7,14 +7,17 @@
 export const MINUTE_MS = 60_000;
 /** The rollup table's bucket (samples_15m). */
 export const ROLLUP_BUCKET_MS = 15 * MINUTE_MS;
+/** The hourly rollup's bucket (samples_1h, built from samples_15m). */
+export const HOURLY_BUCKET_MS = 60 * MINUTE_MS;
 /** Hard cap on points per signal, whatever the width asked for. */
 export const MAX_POINTS_PER_SIGNAL = 2000;
 export const DEFAULT_WIDTH_PX = 1200;
 
 /**
  * Bucket lengths we use, shortest first. Every step of 15 minutes and up is a whole
- * number of rollup buckets, so long ranges can be answered from samples_15m alone;
- * each also divides a day, so buckets line up with midnight UTC.
+ * number of 15-minute buckets, and every step of an hour and up a whole number of
+ * hours, so long ranges can be answered from a rollup alone; each also divides a
+ * day, so buckets line up with midnight UTC.
  */
 export const NICE_BUCKETS_MS: readonly number[] = [
   10_000, 30_000,
@@ -22,7 +25,8 @@ export const NICE_BUCKETS_MS: readonly number[] = [
 ];
 
 export type Resolution = "raw" | "minmax";
-export type BucketSource = "samples" | "rollup";
+/** samples: the stored values; rollup: samples_15m; hourly: samples_1h. */
+export type BucketSource = "samples" | "rollup" | "hourly";
 
 export interface BucketPlan {
   resolution: Resolution;
@@ -50,14 +54,23 @@ export function chooseBucketMs(rangeMs: number, cap: number): number {
 }
 
 /**
- * Raw values when the densest signal fits under the cap; otherwise min/max buckets,
- * read from the 15-minute rollup when the bucket is a whole number of rollup buckets
- * (far fewer rows to read) and from the samples themselves for shorter buckets.
+ * The coarsest table whose buckets divide `bucketMs`, so the fewest rows are read:
+ * the hourly rollup for buckets of whole hours, the 15-minute rollup for whole
+ * quarter hours, the samples themselves for shorter buckets.
+ */
+export function chooseBucketSource(bucketMs: number): BucketSource {
+  if (bucketMs % HOURLY_BUCKET_MS === 0) return "hourly";
+  if (bucketMs % ROLLUP_BUCKET_MS === 0) return "rollup";
+  return "samples";
+}
+
+/**
+ * Raw values when the densest signal fits under the cap; otherwise min/max buckets
+ * of chooseBucketMs, read from the table chooseBucketSource names.
  */
 export function planBuckets(input: { fromMs: number; toMs: number; widthPx: number; maxRawCount: number }): BucketPlan {
   const cap = pointCap(input.widthPx);
   if (input.maxRawCount <= cap) return { resolution: "raw", bucketMs: 0, source: null, cap };
   const bucketMs = chooseBucketMs(input.toMs - input.fromMs, cap);
-  const source: BucketSource = bucketMs % ROLLUP_BUCKET_MS === 0 ? "rollup" : "samples";
-  return { resolution: "minmax", bucketMs, source, cap };
+  return { resolution: "minmax", bucketMs, source: chooseBucketSource(bucketMs), cap };
 }

@@ -10,7 +10,7 @@
 // element length-prefixed.
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import type { Blocks } from "./find-blocks";
-import type { BucketSummaries } from "./summarize-buckets";
+import type { BucketSummaries, HourSummaries } from "./summarize-buckets";
 
 const SIGNATURE = Buffer.from([0x50, 0x47, 0x43, 0x4f, 0x50, 0x59, 0x0a, 0xff, 0x0d, 0x0a, 0x00]);
 const PG_EPOCH_MS = Date.UTC(2000, 0, 1);
@@ -128,6 +128,37 @@ export function encodeRollupRows(s: BucketSummaries, start: number, end: number)
     o = writeTimestamp(d, o, s.tfirst[k]);
     o = int32(d, o, 8);
     o = writeTimestamp(d, o, s.tlast[k]);
+  }
+  return b;
+}
+
+const HOURLY_ROW_BYTES = 2 + (4 + 4) + (4 + 2) + (4 + 8) + (4 + 4) + 5 * (4 + 8) + 2 * (4 + 8);
+
+/** Rows [start, end) of hour summaries as samples_1h tuples
+ * (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tmin, tmax). */
+export function encodeHourlyRows(s: HourSummaries, start: number, end: number): Buffer {
+  const b = Buffer.allocUnsafe((end - start) * HOURLY_ROW_BYTES);
+  const d = new DataView(b.buffer, b.byteOffset, b.byteLength);
+  let o = 0;
+  for (let k = start; k < end; k++) {
+    d.setInt16(o, 11);
+    o = int32(d, o + 2, 4);
+    o = int32(d, o, s.wellId[k]);
+    o = int32(d, o, 2);
+    d.setInt16(o, s.signal[k]);
+    o = int32(d, o + 2, 8);
+    o = writeTimestamp(d, o, s.bucket[k]);
+    o = int32(d, o, 4);
+    o = int32(d, o, s.n[k]);
+    o = float8(d, o, s.vmin[k]);
+    o = float8(d, o, s.vmax[k]);
+    o = float8(d, o, s.vsum[k]);
+    o = float8(d, o, s.vfirst[k]);
+    o = float8(d, o, s.vlast[k]);
+    o = int32(d, o, 8);
+    o = writeTimestamp(d, o, s.tmin[k]);
+    o = int32(d, o, 8);
+    o = writeTimestamp(d, o, s.tmax[k]);
   }
   return b;
 }

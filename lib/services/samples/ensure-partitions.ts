@@ -1,4 +1,4 @@
-// Make sure the monthly partitions of `samples` exist for a time range before a
+// Make sure the monthly partitions of `sample_blocks` exist for a time range before a
 // write, outside the write's transaction: creating a partition takes a strong lock
 // on the parent, which must not be held while rows are being upserted.
 import type pg from "pg";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { summarizeBuckets } from "./summarize-buckets";
+import { summarizeBuckets, summarizeHours } from "./summarize-buckets";
 
 const MIN = 60_000;
 const T0 = Date.UTC(2026, 0, 5, 6, 0); // a bucket boundary (whole quarter hour)
@@ -48,5 +48,29 @@ describe("summarizeBuckets", () => {
 
   it("returns no rows for an empty batch", () => {
     expect(summarizeBuckets(batch([])).length).toBe(0);
+  });
+});
+
+// Hourly rows from quarter-hour rows: sums of counts and sums, least minimum and
+// greatest maximum with the earliest quarter holding each, first value of the first
+// quarter and last value of the last (definitions; worked by hand).
+describe("summarizeHours", () => {
+  it("combines the quarters of each hour", () => {
+    const q = summarizeBuckets(batch([
+      [7, 1, T0, 10], [7, 1, T0 + 20 * MIN, 3], [7, 1, T0 + 40 * MIN, 12], [7, 1, T0 + 50 * MIN, 3],
+      [7, 1, T0 + 60 * MIN, 5],
+      [7, 2, T0 + 5 * MIN, 9],
+    ]));
+    const h = summarizeHours(q);
+    expect(h.length).toBe(3);
+    expect([...h.bucket]).toEqual([T0, T0 + 60 * MIN, T0]);
+    expect([...h.n]).toEqual([4, 1, 1]);
+    expect([...h.vsum]).toEqual([28, 5, 9]);
+    expect([...h.vmin]).toEqual([3, 5, 9]);
+    expect([...h.tmin]).toEqual([T0 + 15 * MIN, T0 + 60 * MIN, T0]); // 3 first seen in the 06:15 quarter
+    expect([...h.vmax]).toEqual([12, 5, 9]);
+    expect([...h.tmax]).toEqual([T0 + 30 * MIN, T0 + 60 * MIN, T0]);
+    expect([...h.vfirst]).toEqual([10, 5, 9]);
+    expect([...h.vlast]).toEqual([3, 5, 9]);
   });
 });

@@ -67,3 +67,67 @@ export function summarizeBuckets(b: ValueColumns<number>): BucketSummaries {
   }
   return out;
 }
+
+/** One samples_1h row per (well, signal, hour) (migration 20261202000005). */
+export interface HourSummaries {
+  length: number;
+  wellId: Int32Array;
+  signal: Uint8Array;
+  /** Hour start, epoch ms. */
+  bucket: Float64Array;
+  n: Int32Array;
+  vmin: Float64Array;
+  vmax: Float64Array;
+  vsum: Float64Array;
+  vfirst: Float64Array;
+  vlast: Float64Array;
+  /** Start of the earliest 15-minute bucket holding the hour's minimum (maximum). */
+  tmin: Float64Array;
+  tmax: Float64Array;
+}
+
+const HOUR_MS = 3_600_000;
+const hourOfBucket = (t: number) => Math.floor(t / HOUR_MS) * HOUR_MS;
+
+/**
+ * The hourly rows from a batch's 15-minute rows (in key order): counts and sums add,
+ * min/max combine, first/last come from the earliest/latest quarter, and the time of
+ * the minimum (maximum) is the earliest quarter holding it, as the SQL refresh in
+ * refresh-hourly-rollup.ts defines them.
+ */
+export function summarizeHours(q: BucketSummaries): HourSummaries {
+  let m = 0;
+  const isNewHour = (k: number) =>
+    k === 0 || q.wellId[k] !== q.wellId[k - 1] || q.signal[k] !== q.signal[k - 1] || hourOfBucket(q.bucket[k]) !== hourOfBucket(q.bucket[k - 1]);
+  for (let k = 0; k < q.length; k++) if (isNewHour(k)) m++;
+  const out: HourSummaries = {
+    length: m, wellId: new Int32Array(m), signal: new Uint8Array(m), bucket: new Float64Array(m), n: new Int32Array(m),
+    vmin: new Float64Array(m), vmax: new Float64Array(m), vsum: new Float64Array(m), vfirst: new Float64Array(m), vlast: new Float64Array(m),
+    tmin: new Float64Array(m), tmax: new Float64Array(m),
+  };
+  let h = -1;
+  for (let k = 0; k < q.length; k++) {
+    if (isNewHour(k)) {
+      h++;
+      out.wellId[h] = q.wellId[k];
+      out.signal[h] = q.signal[k];
+      out.bucket[h] = hourOfBucket(q.bucket[k]);
+      out.n[h] = q.n[k];
+      out.vmin[h] = q.vmin[k];
+      out.vmax[h] = q.vmax[k];
+      out.vsum[h] = q.vsum[k];
+      out.vfirst[h] = q.vfirst[k];
+      out.vlast[h] = q.vlast[k];
+      out.tmin[h] = q.bucket[k];
+      out.tmax[h] = q.bucket[k];
+      continue;
+    }
+    out.n[h] += q.n[k];
+    out.vsum[h] += q.vsum[k];
+    // Strictly lower / higher: on a tie the earlier quarter keeps it.
+    if (q.vmin[k] < out.vmin[h]) { out.vmin[h] = q.vmin[k]; out.tmin[h] = q.bucket[k]; }
+    if (q.vmax[k] > out.vmax[h]) { out.vmax[h] = q.vmax[k]; out.tmax[h] = q.bucket[k]; }
+    out.vlast[h] = q.vlast[k];
+  }
+  return out;
+}

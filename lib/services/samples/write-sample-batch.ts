@@ -2,14 +2,16 @@
 // stored as hour blocks (sample_blocks, migration 20261202000006). Per batch, in one
 // transaction, after taking a lock per series:
 //   1. find which of the batch's hour blocks are already stored (one index probe each);
-//   2. new hours: binary COPY of the blocks, and of their 15-minute rollup rows
-//      computed here (summarize-buckets.ts): an hour with no stored values has no
-//      rollup rows yet, so both are plain inserts, the cheapest write PostgreSQL has;
+//   2. new hours: binary COPY of the blocks, and of their 15-minute and hourly rollup
+//      rows computed here (summarize-buckets.ts): an hour with no stored values has no
+//      rollup rows yet, so all are plain inserts, the cheapest write PostgreSQL has;
 //   3. stored hours: the batch's blocks go to a per-connection TEMP staging table and
 //      are merged into the stored ones by time: the later value of a time wins,
 //      identical values are not rewritten (so re-importing a file changes nothing and
-//      counts its values as unchanged), and the merged hours' rollup buckets are
-//      recomputed from the stored blocks.
+//      counts its values as unchanged), and the merged hours' rollup rows are
+//      recomputed from the stored blocks;
+//   4. every written series gets a new version (sample_series_versions), which tells
+//      the web app's chart cache that its answers for the series are out of date.
 //
 // The batch must hold each (well, signal, t) at most once (readRows and the API
 // service both merge in-batch duplicates first). Rows go in key order; a deadlock
@@ -17,11 +19,12 @@
 import type pg from "pg";
 import { from as copyFrom } from "pg-copy-streams";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
-import { encodeBlockRows, encodeCopyHeader, encodeCopyTrailer, encodeRollupRows } from "./encode-copy-binary";
+import { encodeBlockRows, encodeCopyHeader, encodeCopyTrailer, encodeHourlyRows, encodeRollupRows } from "./encode-copy-binary";
 import { ensureSamplePartitions } from "./ensure-partitions";
 import { findBlocks, HOUR_MS, pickBlocks, type Blocks } from "./find-blocks";
+import { bumpSeriesVersions, refreshHourlyRollup } from "./refresh-hourly-rollup";
 import { isSortedByKey, sortByKey } from "./sort-by-key";
-import { summarizeBuckets } from "./summarize-buckets";
+import { summarizeBuckets, summarizeHours, type BucketSummaries, type HourSummaries } from "./summarize-buckets";
 
 export interface SampleWriteResult {
   /** Values written: new (well, signal, t) keys plus stored keys whose value differed and was replaced. */
@@ -78,9 +81,12 @@ function* blockPieces(batch: ValueColumns<number>, blocks: Blocks, which: readon
   for (let i = 0; i < which.length; i += BLOCKS_PER_CHUNK) yield encodeBlockRows(batch, blocks, which.slice(i, i + BLOCKS_PER_CHUNK));
 }
 
-function* rollupPieces(batch: ValueColumns<number>): Generator<Buffer> {
-  const s = summarizeBuckets(batch);
+function* rollupPieces(s: BucketSummaries): Generator<Buffer> {
   for (let i = 0; i < s.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeRollupRows(s, i, Math.min(s.length, i + ROLLUP_ROWS_PER_CHUNK));
+}
+
+function* hourlyPieces(s: HourSummaries): Generator<Buffer> {
+  for (let i = 0; i < s.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeHourlyRows(s, i, Math.min(s.length, i + ROLLUP_ROWS_PER_CHUNK));
 }
 
 // Which blocks are stored: LATERAL … LIMIT 1 keeps it one primary-key probe per
@@ -186,20 +192,38 @@ export interface SampleWriteOptions {
   isFlushDeferred?: boolean;
 }
 
-/** New hours: COPY the blocks, then their rollup rows (recomputed instead if a stray bucket is in the way). */
+/** New hours: COPY the blocks, then their 15-minute and hourly rollup rows (recomputed instead if a stray row is in the way). */
 async function insertNewHours(client: pg.ClientBase, batch: ValueColumns<number>, blocks: Blocks, fresh: number[]): Promise<void> {
   await copyPieces(client, "COPY sample_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, fresh));
   const freshValues = fresh.length === blocks.length ? batch : pickBlocks(batch, blocks, fresh);
+  const quarters = summarizeBuckets(freshValues);
   await client.query("SAVEPOINT rollup");
   try {
-    await copyPieces(client, "COPY samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast) FROM STDIN (FORMAT binary)", rollupPieces(freshValues));
+    await copyPieces(client, "COPY samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast) FROM STDIN (FORMAT binary)", rollupPieces(quarters));
+    await copyPieces(client, "COPY samples_1h (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tmin, tmax) FROM STDIN (FORMAT binary)", hourlyPieces(summarizeHours(quarters)));
   } catch (e) {
     // A rollup row without stored values (left by a manual delete): rebuild those hours.
     if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
     await client.query("ROLLBACK TO SAVEPOINT rollup");
     const r = hourRanges(blocks, fresh);
     await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
+    await refreshHourlyRollup(client, { wellIds: r.wellIds, signals: r.signals, los: r.los.map((t) => new Date(t)), his: r.his.map((t) => new Date(t)) });
   }
+  // The web app's chart cache checks these versions.
+  const series = seriesOf(blocks, fresh);
+  await bumpSeriesVersions(client, series.wellIds, series.signals);
+}
+
+/** The distinct series of some blocks (blocks are in key order). */
+function seriesOf(blocks: Blocks, which: readonly number[]): { wellIds: number[]; signals: number[] } {
+  const out = { wellIds: [] as number[], signals: [] as number[] };
+  for (const k of which) {
+    const n = out.wellIds.length;
+    if (n > 0 && out.wellIds[n - 1] === blocks.wellId[k] && out.signals[n - 1] === blocks.signal[k]) continue;
+    out.wellIds.push(blocks.wellId[k]);
+    out.signals.push(blocks.signal[k]);
+  }
+  return out;
 }
 
 /** Stored hours: stage the blocks, merge them in by time, recompute the merged hours' buckets. */
@@ -207,10 +231,12 @@ async function mergeStoredHours(client: pg.ClientBase, batch: ValueColumns<numbe
   await ensureStagingTable(client);
   await copyPieces(client, "COPY ingest_stage_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, stored));
   const written = (await client.query<{ written: number }>(MERGE_SQL)).rows[0]?.written ?? 0;
-  // Nothing changed → no bucket changed; skip the rollup read.
+  // Nothing changed → no bucket changed; skip the rollup reads. Otherwise the merged
+  // hours' quarters, then their hourly rows (which also renews the series' versions).
   if (written > 0) {
     const r = hourRanges(blocks, stored);
     await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
+    await refreshHourlyRollup(client, { wellIds: r.wellIds, signals: r.signals, los: r.los.map((t) => new Date(t)), his: r.his.map((t) => new Date(t)) });
   }
   return written;
 }

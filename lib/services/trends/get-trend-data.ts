@@ -2,21 +2,23 @@
 // width can show (raw values when they fit, otherwise min/max per time bucket
 // computed in SQL), with the valve reference lines, the inferred operating valve,
 // the issues and the pad's field events over the range.
+import type pg from "pg";
 import { requireCapability, type Actor } from "@/lib/auth/actor";
 import { AppError } from "@/lib/errors";
 import { CANONICAL_UNIT } from "@/lib/units/units";
 import { SIGNAL_CODE, SIGNAL_QUANTITY, type Signal } from "@/lib/signals";
 import { inferOperatingPoint, valveSurfacePressures } from "@/lib/gaslift/operating-point";
 import type { WellDesign } from "@/lib/gaslift/types";
-import { DEFAULT_WIDTH_PX, planBuckets } from "@/lib/trends/bucket-plan";
-import { breakGaps, toMinMaxPoints } from "@/lib/trends/minmax-points";
+import { DEFAULT_WIDTH_PX, chooseBucketMs, chooseBucketSource, planBuckets, pointCap, type BucketPlan } from "@/lib/trends/bucket-plan";
+import { breakGaps, toMinMaxPoints, type MinMaxBucket } from "@/lib/trends/minmax-points";
 import { formatOperatingValve, formatValveLabel } from "@/lib/trends/valve-label";
 import type { TrendData, TrendOperatingPoint, TrendSeries, TrendValveLine } from "@/lib/trends/trend-types";
-import { getWell } from "@/lib/services/wells/get-well";
 import { getSamplePool } from "@/lib/services/samples/sample-db";
-import { countRawValues, readMinMaxBuckets, readRawValues } from "./query-trend-series";
-import { readRecentMedians, type RecentMedians } from "./read-recent-medians";
+import { countRawValues, readMinMaxBuckets, readRawValues, type SeriesQuery } from "./query-trend-series";
+import { RECENT_MEDIAN_CODES, readRecentMedians, type RecentMedians } from "./read-recent-medians";
+import { readSeriesVersions, readThroughCache } from "./trend-sample-cache";
 import { listFieldEventWindows, listIssueWindows } from "./list-trend-windows";
+import { readTrendWell } from "./read-trend-well";
 
 /** The five signals of the chart's three panels. */
 export const DEFAULT_TREND_SIGNALS: readonly Signal[] = ["casing_pressure", "tubing_pressure", "injection_rate", "gas_rate", "liquid_rate"];
@@ -34,7 +36,6 @@ export interface TrendRequest {
 
 export async function getTrendData(actor: Actor, wellId: number, req: TrendRequest): Promise<TrendData> {
   requireCapability(actor, "wells.read");
-  const well = await getWell(actor, wellId); // 404 for another organization's well
   const { from, to } = req;
   if (!(Number.isFinite(from) && Number.isFinite(to) && from < to)) {
     throw new AppError("invalid", "The range must end after it starts", [{ path: "to", message: "must be after from" }]);
@@ -45,40 +46,28 @@ export async function getTrendData(actor: Actor, wellId: number, req: TrendReque
   const signals = [...new Set(req.signals && req.signals.length > 0 ? req.signals : DEFAULT_TREND_SIGNALS)];
   const widthPx = req.width ?? DEFAULT_WIDTH_PX;
   const db = getSamplePool();
-  const q = { wellId: well.id, codes: signals.map((s) => SIGNAL_CODE[s]), fromMs: from, toMs: to };
-  const scope = { organizationId: actor.organizationId, wellId: well.id, padId: well.padId, fromMs: from, toMs: to };
+  const q: SeriesQuery = { wellId, codes: signals.map((s) => SIGNAL_CODE[s]), fromMs: from, toMs: to };
+  const scope = { organizationId: actor.organizationId, wellId, fromMs: from, toMs: to };
 
-  const [counts, recent, issues, fieldEvents] = await Promise.all([
-    countRawValues(db, q),
-    readRecentMedians(db, well.id, from, to),
+  // The reads are independent, so they run side by side. readTrendWell answers 404
+  // for another organization's well; the sample reads (samples carry no organization)
+  // start alongside it, and their results are dropped, never returned, when it does.
+  // Issue windows are scoped by organization themselves.
+  const wellRead = readTrendWell(actor.organizationId, wellId);
+  const [well, { reduced, recent }, issues, fieldEvents] = await Promise.all([
+    wellRead,
+    readSamplePart(db, q, signals, widthPx),
     listIssueWindows(scope),
-    listFieldEventWindows(scope),
+    wellRead.then((w) => listFieldEventWindows({ ...scope, padId: w.padId })),
   ]);
-  const plan = planBuckets({ fromMs: from, toMs: to, widthPx, maxRawCount: Math.max(0, ...counts.values()) });
-
-  let series: TrendSeries[];
-  if (plan.resolution === "raw") {
-    const raw = await readRawValues(db, q);
-    series = signals.map((signal) => {
-      const s = raw.get(SIGNAL_CODE[signal]) ?? { t: [], v: [] };
-      return { signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], ...breakGaps(s, { minGapMs: MIN_GAP_MS }) };
-    });
-  } else {
-    const buckets = await readMinMaxBuckets(db, q, plan.bucketMs, plan.source ?? "rollup");
-    series = signals.map((signal) => {
-      const points = toMinMaxPoints(buckets.get(SIGNAL_CODE[signal]) ?? [], plan.bucketMs);
-      // A missing bucket or two is a short outage; more breaks the line.
-      return { signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], ...breakGaps(points, { factor: 3, minGapMs: MIN_GAP_MS }) };
-    });
-  }
 
   return {
     wellId: well.id,
     from,
     to,
-    resolution: plan.resolution,
-    bucketMs: plan.bucketMs,
-    series,
+    resolution: reduced.plan.resolution,
+    bucketMs: reduced.plan.bucketMs,
+    series: reduced.series,
     overlays: {
       recent,
       valves: readValveLines(well.design, recent),
@@ -88,6 +77,72 @@ export async function getTrendData(actor: Actor, wellId: number, req: TrendReque
     },
   };
 }
+
+interface SamplePart {
+  reduced: { plan: BucketPlan; series: TrendSeries[] };
+  recent: RecentMedians;
+}
+
+/**
+ * Everything read from the samples: the reduced series and the recent medians,
+ * through the in-memory cache (trend-sample-cache.ts) keyed on the versions of every
+ * series read. Cached answers are shared between requests, so they are frozen.
+ */
+async function readSamplePart(db: pg.Pool, q: SeriesQuery, signals: Signal[], widthPx: number): Promise<SamplePart> {
+  const version = await readSeriesVersions(db, q.wellId, [...new Set([...q.codes, ...RECENT_MEDIAN_CODES])]);
+  const key = `${q.wellId}|${q.codes.join(",")}|${q.fromMs}|${q.toMs}|${widthPx}`;
+  return readThroughCache(key, version, async () => {
+    const [reduced, recent] = await Promise.all([readReducedSeries(db, q, signals, widthPx), readRecentMedians(db, q.wellId, q.fromMs, q.toMs)]);
+    for (const s of reduced.series) {
+      Object.freeze(s.t);
+      Object.freeze(s.v);
+      Object.freeze(s);
+    }
+    // A frozen series list also lets serializeTrendData reuse its encoded bytes.
+    Object.freeze(reduced.series);
+    return Object.freeze({ reduced: Object.freeze(reduced), recent: Object.freeze(recent) });
+  });
+}
+
+/**
+ * Each signal as the chart can show it. When the bucket is read from a rollup, the
+ * rollup's counts come with the buckets, so the usual case is one query; only a
+ * sparse range whose values fit under the cap is read again as raw values. Short
+ * ranges (buckets under 15 minutes) count from samples_15m first, then read the
+ * samples once, raw or bucketed.
+ */
+async function readReducedSeries(db: pg.Pool, q: SeriesQuery, signals: Signal[], widthPx: number): Promise<{ plan: BucketPlan; series: TrendSeries[] }> {
+  const range = { fromMs: q.fromMs, toMs: q.toMs, widthPx };
+  const bucketMs = chooseBucketMs(q.toMs - q.fromMs, pointCap(widthPx));
+  const source = chooseBucketSource(bucketMs);
+  if (source !== "samples") {
+    const answer = await readMinMaxBuckets(db, q, bucketMs, source);
+    const plan = planBuckets({ ...range, maxRawCount: maxOf(answer.counts) });
+    if (plan.resolution === "minmax") return { plan, series: toBucketSeries(signals, answer.buckets, plan.bucketMs) };
+    return { plan, series: toRawSeries(signals, await readRawValues(db, q)) };
+  }
+  const plan = planBuckets({ ...range, maxRawCount: maxOf(await countRawValues(db, q)) });
+  if (plan.resolution === "raw") return { plan, series: toRawSeries(signals, await readRawValues(db, q)) };
+  const answer = await readMinMaxBuckets(db, q, plan.bucketMs, "samples");
+  return { plan, series: toBucketSeries(signals, answer.buckets, plan.bucketMs) };
+}
+
+function toRawSeries(signals: Signal[], raw: Map<number, { t: number[]; v: number[] }>): TrendSeries[] {
+  return signals.map((signal) => {
+    const s = raw.get(SIGNAL_CODE[signal]) ?? { t: [], v: [] };
+    return { signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], ...breakGaps(s, { minGapMs: MIN_GAP_MS }) };
+  });
+}
+
+function toBucketSeries(signals: Signal[], buckets: Map<number, MinMaxBucket[]>, bucketMs: number): TrendSeries[] {
+  return signals.map((signal) => {
+    const points = toMinMaxPoints(buckets.get(SIGNAL_CODE[signal]) ?? [], bucketMs);
+    // A missing bucket or two is a short outage; more breaks the line.
+    return { signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], ...breakGaps(points, { factor: 3, minGapMs: MIN_GAP_MS }) };
+  });
+}
+
+const maxOf = (counts: Map<number, number>) => Math.max(0, ...counts.values());
 
 /** Each valve's surface opening and closing pressure at the recent tubing pressure. */
 function readValveLines(design: WellDesign, recent: RecentMedians): TrendValveLine[] {

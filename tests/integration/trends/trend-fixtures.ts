@@ -1,10 +1,12 @@
 // Invented trend data for the chart tests: 1-minute casing, tubing, injection and
 // produced gas, hourly liquid, with one single-minute casing spike and one tubing
 // dip to find again in the reduced answer. Values are made up (not from any well).
+import type pg from "pg";
 import { SIGNAL_CODE, type Signal } from "@/lib/signals";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { openSampleClient } from "@/lib/services/samples/sample-db";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
+import { refreshHourlyRollup } from "@/lib/services/samples/refresh-hourly-rollup";
 
 export const MINUTE = 60_000;
 export const DAY = 1440 * MINUTE;
@@ -38,6 +40,20 @@ export function valueAt(f: TrendFixture, signal: Signal, t: number): number {
 
 const MINUTE_SIGNALS: Signal[] = ["casing_pressure", "tubing_pressure", "injection_rate", "gas_rate"];
 
+/**
+ * The hourly rollup of the five signals over [fromMs, toMs). Repeating it is harmless
+ * (it recomputes), so it stays correct once the writer refreshes the hourly rollup itself.
+ */
+export async function refreshHourlyRollupOf(client: pg.ClientBase, wellId: number, fromMs: number, toMs: number): Promise<void> {
+  const codes = [...MINUTE_SIGNALS, "liquid_rate" as const].map((s) => SIGNAL_CODE[s]);
+  await refreshHourlyRollup(client, {
+    wellIds: codes.map(() => wellId),
+    signals: codes,
+    los: codes.map(() => new Date(fromMs)),
+    his: codes.map(() => new Date(toMs)),
+  });
+}
+
 /** Write the fixture for one well through the ingest writer (samples and rollup). */
 export async function writeFixture(wellId: number, f: TrendFixture): Promise<number> {
   const client = await openSampleClient();
@@ -47,9 +63,10 @@ export async function writeFixture(wellId: number, f: TrendFixture): Promise<num
     const DAYS_PER_BATCH = 10;
     const perBatch = (4 * 1440 + 24) * DAYS_PER_BATCH;
     for (let d0 = 0; d0 < f.days; d0 += DAYS_PER_BATCH) {
-      const b: ValueColumns<number> = { length: 0, wellId: [], signal: new Uint8Array(perBatch), t: new Float64Array(perBatch), v: new Float64Array(perBatch) };
+      const wellIds: number[] = [];
+      const b: ValueColumns<number> = { length: 0, wellId: wellIds, signal: new Uint8Array(perBatch), t: new Float64Array(perBatch), v: new Float64Array(perBatch) };
       const push = (signal: Signal, t: number) => {
-        b.wellId.push(wellId);
+        wellIds.push(wellId);
         b.signal[b.length] = SIGNAL_CODE[signal];
         b.t[b.length] = t;
         b.v[b.length] = valueAt(f, signal, t);
@@ -62,6 +79,7 @@ export async function writeFixture(wellId: number, f: TrendFixture): Promise<num
       }
       total += b.length;
       await writeSampleBatch(client, b);
+      await refreshHourlyRollupOf(client, wellId, f.start + d0 * DAY, f.start + Math.min(f.days, d0 + DAYS_PER_BATCH) * DAY);
     }
   } finally {
     await client.end();

@@ -4,7 +4,7 @@
 // the expected figures are regression values of our own code, except the valve lines,
 // which are checked against valveSurfacePressures (itself tested against DOMAIN.md's
 // [published]/[computed] values in lib/gaslift).
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { FieldEvent, Issue, Mandrel } from "@/models";
 import { closeDb, makeOrg, type TestOrg } from "../helpers";
 import { getTrendData } from "@/lib/services/trends/get-trend-data";
@@ -14,6 +14,12 @@ import { mandrelColumns } from "@/lib/services/wells/well-dto";
 import { valveSurfacePressures } from "@/lib/gaslift/operating-point";
 import { formatValveLabel } from "@/lib/trends/valve-label";
 import { AppError } from "@/lib/errors";
+import { readMinMaxBuckets } from "@/lib/services/trends/query-trend-series";
+import { readTrendWell } from "@/lib/services/trends/read-trend-well";
+import { clearTrendSampleCache } from "@/lib/services/trends/trend-sample-cache";
+import { openSampleClient } from "@/lib/services/samples/sample-db";
+import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
+import { refreshHourlyRollupOf } from "./trend-fixtures";
 import { DAY, MINUTE, makeFixture, valueAt, writeFixture } from "./trend-fixtures";
 
 let org: TestOrg;
@@ -50,8 +56,10 @@ beforeAll(async () => {
 
 afterAll(async () => {
   // 90 days of minute values are ~0.5 M rows: leave the shared test database as it was.
-  await getSamplePool().query("DELETE FROM samples WHERE well_id = $1", [org.wellId]);
+  await getSamplePool().query("DELETE FROM sample_blocks WHERE well_id = $1", [org.wellId]);
   await getSamplePool().query("DELETE FROM samples_15m WHERE well_id = $1", [org.wellId]);
+  await getSamplePool().query("DELETE FROM samples_1h WHERE well_id = $1", [org.wellId]);
+  await getSamplePool().query("DELETE FROM sample_series_versions WHERE well_id = $1", [org.wellId]);
   await getSamplePool().end();
   await closeDb();
 });
@@ -104,6 +112,17 @@ describe("getTrendData", () => {
     expect(Math.max(...casing.v.map((v) => v ?? -Infinity))).toBe(fixture.spikeValue);
   });
 
+  it("reads the same valve design and pad as the well page (getWell)", async () => {
+    const full = await getWell(org.actors.engineer, org.wellId);
+    const lean = await readTrendWell(org.organizationId, org.wellId);
+    // getWell's mandrels also carry their row id and install date, which the design does not use.
+    const mandrels = full.design.mandrels.map((m) => ({
+      position: m.position, mdFt: m.mdFt, tvdFt: m.tvdFt, kind: m.kind, portIn: m.portIn, valveOdIn: m.valveOdIn, rRatio: m.rRatio, tropsig: m.tropsig,
+    }));
+    expect(lean).toEqual({ id: full.id, padId: full.padId, design: { ...full.design, mandrels } });
+    await expect(readTrendWell(other.organizationId, org.wellId)).rejects.toMatchObject({ code: "not_found" });
+  });
+
   it("answers 404 for another organization's well", async () => {
     const p = getTrendData(other.actors.engineer, org.wellId, { from: fixture.start, to: END });
     await expect(p).rejects.toBeInstanceOf(AppError);
@@ -140,5 +159,98 @@ describe("getTrendData", () => {
     const early = await getTrendData(org.actors.engineer, org.wellId, { from: fixture.start, to: fixture.start + DAY });
     expect(early.overlays.issues).toEqual([]);
     expect(early.overlays.fieldEvents).toEqual([]);
+  });
+});
+
+/** The SQL text of a pool.query call: a string, or a named statement's config. */
+const sqlOf = (arg: unknown) => (typeof arg === "string" ? arg : (arg as { text: string }).text);
+
+describe("which table a trend is read from", () => {
+  /** The tables named in FROM clauses of the sample queries one getTrendData call runs. */
+  async function tablesRead(from: number, to: number): Promise<Set<string>> {
+    clearTrendSampleCache();
+    const pool = getSamplePool();
+    const spy = vi.spyOn(pool, "query");
+    try {
+      await getTrendData(org.actors.engineer, org.wellId, { from, to, width: 1200 });
+      const texts = spy.mock.calls.map((c) => sqlOf(c[0]));
+      return new Set(texts.flatMap((t) => [...t.matchAll(/FROM (samples\w*)/g)].map((m) => m[1])));
+    } finally {
+      spy.mockRestore();
+    }
+  }
+
+  it("reads 90 days (3-hour buckets) from the hourly rollup, and samples only for the recent medians", async () => {
+    const tables = await tablesRead(fixture.start, END);
+    expect(tables.has("samples_1h")).toBe(true);
+    expect(tables.has("samples_15m")).toBe(false);
+  });
+
+  it("reads 7 days (15-minute buckets) from the 15-minute rollup", async () => {
+    const tables = await tablesRead(END - 7 * DAY, END);
+    expect(tables.has("samples_15m")).toBe(true);
+    expect(tables.has("samples_1h")).toBe(false);
+  });
+
+  it("reads 2 days (5-minute buckets) from the samples, counting from the 15-minute rollup first", async () => {
+    const tables = await tablesRead(fixture.spikeAt - DAY, fixture.spikeAt + DAY);
+    expect([...tables].sort()).toEqual(["samples", "samples_15m"]);
+  });
+
+  it("gives the same 3-hour buckets and counts from the hourly rollup as from the 15-minute rollup (regression)", async () => {
+    const q = { wellId: org.wellId, codes: [1, 2, 3, 4, 5], fromMs: fixture.start, toMs: END };
+    const hourly = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "hourly");
+    const quarter = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "rollup");
+    expect(hourly.buckets.get(1)!.length).toBe(90 * 8);
+    expect(hourly).toEqual(quarter);
+    // And the extremes agree with the samples themselves (the order may differ inside a quarter hour).
+    const exact = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "samples");
+    expect(hourly.counts).toEqual(exact.counts);
+    for (const [code, list] of exact.buckets) {
+      expect(hourly.buckets.get(code)!.map((b) => [b.bucket, b.vmin, b.vmax])).toEqual(list.map((b) => [b.bucket, b.vmin, b.vmax]));
+    }
+  });
+});
+
+describe("the in-memory chart cache", () => {
+  const range = () => ({ from: fixture.start, to: END, width: 1200 });
+
+  it("answers a repeated request without reading the samples again, with the same series", async () => {
+    clearTrendSampleCache();
+    const first = await getTrendData(org.actors.engineer, org.wellId, range());
+    const spy = vi.spyOn(getSamplePool(), "query");
+    try {
+      const again = await getTrendData(org.actors.engineer, org.wellId, range());
+      const texts = spy.mock.calls.map((c) => sqlOf(c[0]));
+      expect(texts).toHaveLength(1);
+      expect(texts[0]).toContain("sample_series_versions");
+      expect(again.series).toEqual(first.series);
+    } finally {
+      spy.mockRestore();
+    }
+  });
+
+  it("never shows a cached answer after a value in its range is rewritten (by any writer)", async () => {
+    const before = await getTrendData(org.actors.engineer, org.wellId, range());
+    const at = fixture.start + 10 * DAY + 33 * MINUTE;
+    const casing = () => before.series[0];
+    expect(Math.max(...casing().v.map((v) => v ?? -Infinity))).toBe(fixture.spikeValue);
+    // Another writer (its own connection, as the ingest worker is its own process) stores a higher spike.
+    const client = await openSampleClient();
+    try {
+      const b = { length: 1, wellId: [org.wellId], signal: Uint8Array.of(1), t: Float64Array.of(at), v: Float64Array.of(1600) };
+      await writeSampleBatch(client, b);
+      await refreshHourlyRollupOf(client, org.wellId, at - 15 * MINUTE, at + 15 * MINUTE);
+      const after = await getTrendData(org.actors.engineer, org.wellId, range());
+      expect(Math.max(...after.series[0].v.map((v) => v ?? -Infinity))).toBe(1600);
+      // Put the fixture value back for the other tests (and the cache follows again).
+      b.v[0] = valueAt(fixture, "casing_pressure", at);
+      await writeSampleBatch(client, b);
+      await refreshHourlyRollupOf(client, org.wellId, at - 15 * MINUTE, at + 15 * MINUTE);
+      const restored = await getTrendData(org.actors.engineer, org.wellId, range());
+      expect(Math.max(...restored.series[0].v.map((v) => v ?? -Infinity))).toBe(fixture.spikeValue);
+    } finally {
+      await client.end();
+    }
   });
 });

@@ -1,0 +1,54 @@
+// The pre-encoded answer must be exactly JSON.stringify's bytes (the chart parses it
+// with JSON.parse); regression checks of our own serializer, no outside source.
+import { describe, expect, it } from "vitest";
+import { serializeTrendData } from "./serialize-trend-data";
+import type { TrendData, TrendSeries } from "./trend-types";
+
+const decode = (b: Uint8Array) => new TextDecoder().decode(b);
+
+function makeData(series: TrendSeries[]): TrendData {
+  return {
+    wellId: 7,
+    from: 1_780_000_000_000,
+    to: 1_787_776_000_000,
+    resolution: "minmax",
+    bucketMs: 10_800_000,
+    series,
+    overlays: {
+      recent: { casingPsig: 961.2345678901234, tubingPsig: null, injectionMscfd: 612.5, windowEnd: 1_787_775_940_000 },
+      valves: [{ position: 1, kind: "ipo", surfaceOpeningPsig: 1012.25, surfaceClosingPsig: 990.125, openLabel: "V1 open 1,012 psig", closeLabel: "V1 close 990 psig" }],
+      operatingPoint: null,
+      issues: [{ id: 3, rule: "heading", label: "Heading — “swings”", start: 1_781_000_000_000, end: null, status: "new" }],
+      fieldEvents: [],
+    },
+  };
+}
+
+const series = (): TrendSeries[] => [
+  { signal: "casing_pressure", unit: "psig", t: [1_780_002_700_000, 1_780_008_100_000, 1_780_010_000_000], v: [1053.7615640750653, null, 1e-7] },
+  { signal: "tubing_pressure", unit: "psig", t: [], v: [] },
+];
+
+describe("serializeTrendData", () => {
+  it("gives exactly JSON.stringify's text, full precision and nulls included", () => {
+    const d = makeData(series());
+    expect(decode(serializeTrendData(d))).toBe(JSON.stringify(d));
+  });
+
+  it("reuses a frozen series list's bytes and still writes the current overlays", () => {
+    const list = Object.freeze(series()) as TrendSeries[];
+    const first = makeData(list);
+    expect(decode(serializeTrendData(first))).toBe(JSON.stringify(first));
+    const second = makeData(list);
+    second.overlays.issues = [];
+    expect(decode(serializeTrendData(second))).toBe(JSON.stringify(second));
+  });
+
+  it("encodes an unfrozen list afresh each time (it may have changed)", () => {
+    const list = series();
+    const d = makeData(list);
+    serializeTrendData(d);
+    list[0].v[1] = 5;
+    expect(decode(serializeTrendData(d))).toBe(JSON.stringify(d));
+  });
+});

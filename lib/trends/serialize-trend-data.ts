@@ -1,0 +1,36 @@
+// The trend answer as JSON bytes, byte for byte what JSON.stringify gives, but with
+// the series part (about 230 kB for 5 × 1,440 points) serialized once per series
+// list: the service hands out the same frozen list while its cached answer is
+// current (lib/services/trends/trend-sample-cache.ts), so a repeated chart only
+// serializes its small overlays. Full precision is kept: the bytes of each number
+// are JSON.stringify's own.
+import type { TrendData, TrendSeries } from "./trend-types";
+
+const encoder = new TextEncoder();
+const seriesBytes = new WeakMap<readonly TrendSeries[], Uint8Array>();
+
+function encodeSeries(series: readonly TrendSeries[]): Uint8Array {
+  let bytes = seriesBytes.get(series);
+  if (!bytes) {
+    bytes = encoder.encode(JSON.stringify(series));
+    // Only frozen lists can be remembered: a list that may still change is encoded each time.
+    if (Object.isFrozen(series)) seriesBytes.set(series, bytes);
+  }
+  return bytes;
+}
+
+/** JSON.stringify(data) as UTF-8, reusing the encoded series of a frozen series list. */
+export function serializeTrendData(data: TrendData): Uint8Array<ArrayBuffer> {
+  // Same key order as TrendData (and as JSON.stringify of the object the service builds).
+  const head = encoder.encode(
+    `{"wellId":${JSON.stringify(data.wellId)},"from":${JSON.stringify(data.from)},"to":${JSON.stringify(data.to)},` +
+      `"resolution":${JSON.stringify(data.resolution)},"bucketMs":${JSON.stringify(data.bucketMs)},"series":`,
+  );
+  const series = encodeSeries(data.series);
+  const tail = encoder.encode(`,"overlays":${JSON.stringify(data.overlays)}}`);
+  const out = new Uint8Array(head.length + series.length + tail.length);
+  out.set(head, 0);
+  out.set(series, head.length);
+  out.set(tail, head.length + series.length);
+  return out;
+}
