@@ -10,6 +10,7 @@ import { DiagnoseJobSchema, IngestJobSchema, QUEUES } from "@/lib/queue/jobs";
 import { getQueue } from "@/lib/queue/queues";
 import { IngestRefusedError, markUploadFailed, processUpload, UploadBusyError } from "@/lib/services/uploads/process-upload";
 import { requeueStuckUploads } from "@/lib/services/uploads/requeue-stuck-uploads";
+import { warmParseThread } from "@/lib/services/uploads/read-rows-in-thread";
 import { findUploadSubmitter, markUploadRetrying } from "@/lib/services/uploads/mark-upload-retrying";
 import type { Processor } from "./registry";
 
@@ -54,6 +55,11 @@ async function processIngestJob(job: Job): Promise<unknown> {
   }
 }
 
+async function startIngest(): Promise<void> {
+  warmParseThread();
+  await startSweep();
+}
+
 async function startSweep(): Promise<void> {
   const sweep = () =>
     requeueStuckUploads().then(
@@ -68,5 +74,5 @@ export const ingestProcessor: Processor = {
   queue: QUEUES.ingest,
   process: processIngestJob,
   concurrency: Number(process.env.INGEST_CONCURRENCY ?? 1),
-  onStart: startSweep,
+  onStart: startIngest,
 };

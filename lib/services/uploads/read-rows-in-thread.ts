@@ -3,8 +3,10 @@
 // end. This side feeds the file's chunks on request and acknowledges each batch once
 // `onBatch` has settled, so the thread parses one batch ahead, no more.
 //
-// If the thread cannot start (before it asked for any of the file), the rows are
-// parsed here instead: same result, one core.
+// Threads are kept between uploads (a few idle ones, unreferenced so they never keep
+// the process up) and a thread that failed is thrown away. If a new thread cannot
+// start (before it asked for any of the file), the rows are parsed here instead:
+// same result, one core.
 import path from "node:path";
 import { Worker } from "node:worker_threads";
 import { readRows, type ReadOptions, type ReadSummary, type RowBatch } from "@/lib/ingest/read-rows";
@@ -19,6 +21,8 @@ type ThreadMessage =
   | { type: "failed"; message: string };
 
 const THREAD_FILE = path.join(__dirname, "..", "..", "..", "workers", "parse-rows.thread.cjs");
+const MAX_IDLE = 2;
+const idle: Worker[] = [];
 
 function ownsItsMemory(b: Uint8Array): boolean {
   return b.byteOffset === 0 && b.buffer.byteLength === b.byteLength && b.buffer instanceof ArrayBuffer;
@@ -26,6 +30,24 @@ function ownsItsMemory(b: Uint8Array): boolean {
 
 export function isParseThreadWanted(): boolean {
   return process.env.INGEST_PARSE_THREAD !== "0";
+}
+
+/** Start an idle thread ahead of the first upload (the worker process calls this at start). */
+export function warmParseThread(): void {
+  if (!isParseThreadWanted() || idle.length > 0) return;
+  const worker = new Worker(THREAD_FILE);
+  worker.on("error", (e) => console.warn(`[ingest] parse thread did not start: ${e.message}`));
+  release(worker);
+}
+
+function release(worker: Worker): void {
+  worker.removeAllListeners("message");
+  worker.removeAllListeners("error");
+  worker.removeAllListeners("exit");
+  if (idle.length >= MAX_IDLE) return void worker.terminate();
+  worker.unref();
+  worker.once("exit", () => idle.splice(idle.indexOf(worker) >>> 0, 1));
+  idle.push(worker);
 }
 
 export async function readRowsInThread(
@@ -37,17 +59,19 @@ export async function readRowsInThread(
   options: ReadOptions = {},
 ): Promise<ReadSummary<number>> {
   const { signal, ...plain } = options;
-  const worker = new Worker(THREAD_FILE, {
-    workerData: { detection, mapping, wells, options: plain },
-  });
+  const reused = idle.pop();
+  if (reused) reused.removeAllListeners("exit");
+  const worker = reused ?? new Worker(THREAD_FILE);
+  worker.ref();
   const chunks = input[Symbol.asyncIterator]();
-  let hasStarted = false;
-  // Messages are handled one at a time, in order.
-  let queue: Promise<unknown> = Promise.resolve();
-
+  let hasStarted = reused !== undefined;
   let startError = "";
+  let isSettled = false;
+
   const result = new Promise<ReadSummary<number> | "fallback">((resolve, reject) => {
     const fail = (e: unknown) => {
+      if (isSettled) return;
+      isSettled = true;
       reject(e);
       void worker.terminate();
     };
@@ -64,23 +88,39 @@ export async function readRowsInThread(
         await onBatch(m.batch);
         worker.postMessage({ type: "ack" });
       } else if (m.type === "done") {
+        isSettled = true;
+        release(worker);
         resolve(m.summary);
-        void worker.terminate();
       } else {
         throw new Error(m.message);
       }
     };
+    // Pulls are answered at once, on their own chain (the file is read in order);
+    // batches and the end are handled in order on another, so a batch waiting for
+    // the database never holds up the next chunk.
+    let reads: Promise<unknown> = Promise.resolve();
+    let queue: Promise<unknown> = Promise.resolve();
     worker.on("message", (m: ThreadMessage) => {
-      queue = queue.then(() => handle(m)).catch(fail);
+      if (m.type === "pull") reads = reads.then(() => handle(m)).catch(fail);
+      else queue = queue.then(() => handle(m)).catch(fail);
     });
     worker.on("error", (e) => {
       startError = e.message;
       if (hasStarted) fail(e);
-      else resolve("fallback");
+      else if (!isSettled) {
+        isSettled = true;
+        resolve("fallback");
+      }
     });
     worker.on("exit", (code) => {
-      if (code !== 0) queue = queue.then(() => (hasStarted ? fail(new Error(`parse thread exited with ${code}`)) : resolve("fallback")));
+      if (isSettled) return;
+      if (hasStarted) fail(new Error(`parse thread exited with ${code}`));
+      else {
+        isSettled = true;
+        resolve("fallback");
+      }
     });
+    worker.postMessage({ type: "start", input: { detection, mapping, wells, options: plain } });
   });
   const outcome = await result;
   if (outcome !== "fallback") return outcome;
