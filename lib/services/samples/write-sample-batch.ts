@@ -1,7 +1,9 @@
 // The one bulk write path for samples (file ingest and the JSON API). Samples are
 // stored as hour blocks (sample_blocks, migration 20261202000006). Per batch, in one
 // transaction, after taking a lock per series:
-//   1. find which of the batch's hour blocks are already stored (one index probe each);
+//   1. try the whole batch as new hours (step 2); if one is already stored, the blocks
+//      COPY fails on the key: roll back to a savepoint and find which hours are stored
+//      (one index probe each), then insert the new ones and merge the rest;
 //   2. new hours: binary COPY of the blocks, and of their 15-minute and hourly rollup
 //      rows computed here (summarize-buckets.ts): an hour with no stored values has no
 //      rollup rows yet, so all are plain inserts, the cheapest write PostgreSQL has;
@@ -241,6 +243,37 @@ async function mergeStoredHours(client: pg.ClientBase, batch: ValueColumns<numbe
   return written;
 }
 
+/**
+ * All hours new (the usual case, and always so for a file in time order): one COPY
+ * each for blocks and rollups, no look-up first. If any hour is already stored the
+ * blocks COPY fails on the key; we roll back to the savepoint, look up which hours
+ * are stored, insert the new ones and merge the rest.
+ */
+async function writeHours(client: pg.ClientBase, batch: ValueColumns<number>, blocks: Blocks): Promise<number> {
+  const all = Array.from({ length: blocks.length }, (_, k) => k);
+  await client.query("SAVEPOINT hours");
+  try {
+    await insertNewHours(client, batch, blocks, all);
+    return batch.length;
+  } catch (e) {
+    if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
+    await client.query("ROLLBACK TO SAVEPOINT hours");
+  }
+  const storedRows = (await client.query<{ i: number }>(STORED_SQL, [blocks.wellId, blocks.signal, blocks.hour])).rows;
+  const isStored = new Uint8Array(blocks.length);
+  for (const row of storedRows) isStored[row.i - 1] = 1;
+  const fresh: number[] = [];
+  const stored: number[] = [];
+  for (let k = 0; k < blocks.length; k++) (isStored[k] ? stored : fresh).push(k);
+  let written = 0;
+  if (fresh.length > 0) {
+    await insertNewHours(client, batch, blocks, fresh);
+    for (const k of fresh) written += blocks.end[k] - blocks.start[k];
+  }
+  if (stored.length > 0) written += await mergeStoredHours(client, batch, blocks, stored);
+  return written;
+}
+
 export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueColumns<number>, options: SampleWriteOptions = {}): Promise<SampleWriteResult> {
   if (unsorted.length === 0) return { written: 0, unchanged: 0 };
   const batch = isSortedByKey(unsorted) ? unsorted : sortByKey(unsorted);
@@ -263,18 +296,7 @@ export async function writeSampleBatch(client: pg.ClientBase, unsorted: ValueCol
       // rebuild a rollup bucket from a snapshot missing the other's values. Keys are
       // taken in ascending order, so two writers cannot deadlock on them.
       await client.query("SELECT count(pg_advisory_xact_lock(k)) FROM unnest($1::bigint[]) AS k", [lockKeys]);
-      const storedRows = (await client.query<{ i: number }>(STORED_SQL, [blocks.wellId, blocks.signal, blocks.hour])).rows;
-      const isStored = new Uint8Array(blocks.length);
-      for (const row of storedRows) isStored[row.i - 1] = 1;
-      const fresh: number[] = [];
-      const stored: number[] = [];
-      for (let k = 0; k < blocks.length; k++) (isStored[k] ? stored : fresh).push(k);
-      let written = 0;
-      if (fresh.length > 0) {
-        await insertNewHours(client, batch, blocks, fresh);
-        for (const k of fresh) written += blocks.end[k] - blocks.start[k];
-      }
-      if (stored.length > 0) written += await mergeStoredHours(client, batch, blocks, stored);
+      const written = await writeHours(client, batch, blocks);
       await client.query("COMMIT");
       return { written, unchanged: batch.length - written };
     } catch (e) {
