@@ -19,10 +19,12 @@
 // a DEFAULT partition for times outside the plausible range. The partition helper
 // functions keep their names and now make sample_blocks partitions.
 
-const PARTITION_FUNCTIONS = `
+// The partition helpers for a table partitioned by month on `col` (the same text as
+// migration 20261202000002 wrote for samples, with the table, column and key as inputs).
+const partitionFunctions = ({ table, col, key }) => `
 CREATE OR REPLACE FUNCTION bellows_sample_partition_name(month_start timestamptz)
 RETURNS text LANGUAGE sql IMMUTABLE AS $$
-  SELECT 'sample_blocks_' || to_char(month_start AT TIME ZONE 'UTC', 'YYYY"m"MM')
+  SELECT '${table}_' || to_char(month_start AT TIME ZONE 'UTC', 'YYYY"m"MM')
 $$;
 
 CREATE OR REPLACE FUNCTION bellows_ensure_sample_partition(ts timestamptz)
@@ -36,50 +38,22 @@ BEGIN
   IF to_regclass(part) IS NOT NULL THEN RETURN part; END IF;
   PERFORM pg_advisory_xact_lock(hashtext('bellows_samples_partition'));
   IF to_regclass(part) IS NOT NULL THEN RETURN part; END IF;
-  SELECT count(*) INTO moved FROM sample_blocks_default WHERE hour >= lo AND hour < hi;
+  SELECT count(*) INTO moved FROM ${table}_default WHERE ${col} >= lo AND ${col} < hi;
   IF moved = 0 THEN
-    EXECUTE format('CREATE TABLE %I PARTITION OF sample_blocks FOR VALUES FROM (%L) TO (%L)', part, lo, hi);
+    EXECUTE format('CREATE TABLE %I PARTITION OF ${table} FOR VALUES FROM (%L) TO (%L)', part, lo, hi);
   ELSE
-    EXECUTE format('CREATE TABLE %I (LIKE sample_blocks INCLUDING DEFAULTS)', part);
-    EXECUTE format('WITH m AS (DELETE FROM sample_blocks_default WHERE hour >= %L AND hour < %L RETURNING *) INSERT INTO %I SELECT * FROM m', lo, hi, part);
-    EXECUTE format('ALTER TABLE %I ADD PRIMARY KEY (well_id, signal, hour)', part);
-    EXECUTE format('ALTER TABLE sample_blocks ATTACH PARTITION %I FOR VALUES FROM (%L) TO (%L)', part, lo, hi);
+    EXECUTE format('CREATE TABLE %I (LIKE ${table} INCLUDING DEFAULTS)', part);
+    EXECUTE format('WITH m AS (DELETE FROM ${table}_default WHERE ${col} >= %L AND ${col} < %L RETURNING *) INSERT INTO %I SELECT * FROM m', lo, hi, part);
+    EXECUTE format('ALTER TABLE %I ADD PRIMARY KEY (${key})', part);
+    EXECUTE format('ALTER TABLE ${table} ATTACH PARTITION %I FOR VALUES FROM (%L) TO (%L)', part, lo, hi);
   END IF;
   RETURN part;
 END
 $$;
 `;
 
-const OLD_PARTITION_FUNCTIONS = `
-CREATE OR REPLACE FUNCTION bellows_sample_partition_name(month_start timestamptz)
-RETURNS text LANGUAGE sql IMMUTABLE AS $$
-  SELECT 'samples_' || to_char(month_start AT TIME ZONE 'UTC', 'YYYY"m"MM')
-$$;
-
-CREATE OR REPLACE FUNCTION bellows_ensure_sample_partition(ts timestamptz)
-RETURNS text LANGUAGE plpgsql AS $$
-DECLARE
-  lo timestamptz := date_trunc('month', ts AT TIME ZONE 'UTC') AT TIME ZONE 'UTC';
-  hi timestamptz := (date_trunc('month', ts AT TIME ZONE 'UTC') + interval '1 month') AT TIME ZONE 'UTC';
-  part text := bellows_sample_partition_name(lo);
-  moved bigint;
-BEGIN
-  IF to_regclass(part) IS NOT NULL THEN RETURN part; END IF;
-  PERFORM pg_advisory_xact_lock(hashtext('bellows_samples_partition'));
-  IF to_regclass(part) IS NOT NULL THEN RETURN part; END IF;
-  SELECT count(*) INTO moved FROM samples_default WHERE t >= lo AND t < hi;
-  IF moved = 0 THEN
-    EXECUTE format('CREATE TABLE %I PARTITION OF samples FOR VALUES FROM (%L) TO (%L)', part, lo, hi);
-  ELSE
-    EXECUTE format('CREATE TABLE %I (LIKE samples INCLUDING DEFAULTS)', part);
-    EXECUTE format('WITH m AS (DELETE FROM samples_default WHERE t >= %L AND t < %L RETURNING *) INSERT INTO %I SELECT * FROM m', lo, hi, part);
-    EXECUTE format('ALTER TABLE %I ADD PRIMARY KEY (well_id, signal, t)', part);
-    EXECUTE format('ALTER TABLE samples ATTACH PARTITION %I FOR VALUES FROM (%L) TO (%L)', part, lo, hi);
-  END IF;
-  RETURN part;
-END
-$$;
-`;
+const PARTITION_FUNCTIONS = partitionFunctions({ table: "sample_blocks", col: "hour", key: "well_id, signal, hour" });
+const OLD_PARTITION_FUNCTIONS = partitionFunctions({ table: "samples", col: "t", key: "well_id, signal, t" });
 
 const VIEW = `
 CREATE VIEW samples AS

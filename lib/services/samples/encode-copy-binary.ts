@@ -10,7 +10,7 @@
 // element length-prefixed.
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import type { Blocks } from "./find-blocks";
-import type { BucketSummaries, HourSummaries } from "./summarize-buckets";
+import type { SummaryColumns } from "./summarize-buckets";
 
 const SIGNATURE = Buffer.from([0x50, 0x47, 0x43, 0x4f, 0x50, 0x59, 0x0a, 0xff, 0x0d, 0x0a, 0x00]);
 const PG_EPOCH_MS = Date.UTC(2000, 0, 1);
@@ -95,7 +95,7 @@ export function encodeBlockRows(batch: ValueColumns<number>, blocks: Blocks, whi
   return b;
 }
 
-const ROLLUP_ROW_BYTES = 2 + (4 + 4) + (4 + 2) + (4 + 8) + (4 + 4) + 5 * (4 + 8) + 2 * (4 + 8);
+const SUMMARY_ROW_BYTES = 2 + (4 + 4) + (4 + 2) + (4 + 8) + (4 + 4) + 5 * (4 + 8) + 2 * (4 + 8);
 
 function float8(d: DataView, o: number, x: number): number {
   d.setInt32(o, 8);
@@ -103,10 +103,13 @@ function float8(d: DataView, o: number, x: number): number {
   return o + 12;
 }
 
-/** Rows [start, end) of bucket summaries as samples_15m tuples
- * (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast). */
-export function encodeRollupRows(s: BucketSummaries, start: number, end: number): Buffer {
-  const b = Buffer.allocUnsafe((end - start) * ROLLUP_ROW_BYTES);
+/**
+ * Rows [start, end) of rollup summaries as tuples of (well_id, signal, bucket, n, vmin,
+ * vmax, vsum, vfirst, vlast, time1, time2): samples_15m takes the times of its first and
+ * last value there, samples_1h the times of its minimum and maximum.
+ */
+export function encodeSummaryRows(s: SummaryColumns, times: readonly [Float64Array, Float64Array], start: number, end: number): Buffer {
+  const b = Buffer.allocUnsafe((end - start) * SUMMARY_ROW_BYTES);
   const d = new DataView(b.buffer, b.byteOffset, b.byteLength);
   let o = 0;
   for (let k = start; k < end; k++) {
@@ -125,40 +128,9 @@ export function encodeRollupRows(s: BucketSummaries, start: number, end: number)
     o = float8(d, o, s.vfirst[k]);
     o = float8(d, o, s.vlast[k]);
     o = int32(d, o, 8);
-    o = writeTimestamp(d, o, s.tfirst[k]);
+    o = writeTimestamp(d, o, times[0][k]);
     o = int32(d, o, 8);
-    o = writeTimestamp(d, o, s.tlast[k]);
-  }
-  return b;
-}
-
-const HOURLY_ROW_BYTES = 2 + (4 + 4) + (4 + 2) + (4 + 8) + (4 + 4) + 5 * (4 + 8) + 2 * (4 + 8);
-
-/** Rows [start, end) of hour summaries as samples_1h tuples
- * (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tmin, tmax). */
-export function encodeHourlyRows(s: HourSummaries, start: number, end: number): Buffer {
-  const b = Buffer.allocUnsafe((end - start) * HOURLY_ROW_BYTES);
-  const d = new DataView(b.buffer, b.byteOffset, b.byteLength);
-  let o = 0;
-  for (let k = start; k < end; k++) {
-    d.setInt16(o, 11);
-    o = int32(d, o + 2, 4);
-    o = int32(d, o, s.wellId[k]);
-    o = int32(d, o, 2);
-    d.setInt16(o, s.signal[k]);
-    o = int32(d, o + 2, 8);
-    o = writeTimestamp(d, o, s.bucket[k]);
-    o = int32(d, o, 4);
-    o = int32(d, o, s.n[k]);
-    o = float8(d, o, s.vmin[k]);
-    o = float8(d, o, s.vmax[k]);
-    o = float8(d, o, s.vsum[k]);
-    o = float8(d, o, s.vfirst[k]);
-    o = float8(d, o, s.vlast[k]);
-    o = int32(d, o, 8);
-    o = writeTimestamp(d, o, s.tmin[k]);
-    o = int32(d, o, 8);
-    o = writeTimestamp(d, o, s.tmax[k]);
+    o = writeTimestamp(d, o, times[1][k]);
   }
   return b;
 }

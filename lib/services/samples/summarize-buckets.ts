@@ -6,21 +6,25 @@ import type { ValueColumns } from "@/lib/ingest/value-buffer";
 
 export const BUCKET_MS = 15 * 60_000;
 
-/** One row per (well, signal, bucket), as parallel typed arrays. */
-export interface BucketSummaries {
+/** Rollup rows as parallel typed arrays: what samples_15m and samples_1h rows share. */
+export interface SummaryColumns {
   length: number;
   wellId: Int32Array;
   signal: Uint8Array;
-  /** Bucket start, epoch ms (multiples of 15 minutes from the Unix epoch, as 2000-01-01 UTC is). */
+  /** Bucket start, epoch ms (15-minute and hour buckets are whole multiples from the Unix epoch, as 2000-01-01 UTC is). */
   bucket: Float64Array;
   n: Int32Array;
   vmin: Float64Array;
   vmax: Float64Array;
   vsum: Float64Array;
-  tfirst: Float64Array;
   vfirst: Float64Array;
-  tlast: Float64Array;
   vlast: Float64Array;
+}
+
+/** One samples_15m row per (well, signal, 15-minute bucket), with the times of its first and last value. */
+export interface BucketSummaries extends SummaryColumns {
+  tfirst: Float64Array;
+  tlast: Float64Array;
 }
 
 const bucketOf = (t: number) => Math.floor(t / BUCKET_MS) * BUCKET_MS;
@@ -69,18 +73,7 @@ export function summarizeBuckets(b: ValueColumns<number>): BucketSummaries {
 }
 
 /** One samples_1h row per (well, signal, hour) (migration 20261202000005). */
-export interface HourSummaries {
-  length: number;
-  wellId: Int32Array;
-  signal: Uint8Array;
-  /** Hour start, epoch ms. */
-  bucket: Float64Array;
-  n: Int32Array;
-  vmin: Float64Array;
-  vmax: Float64Array;
-  vsum: Float64Array;
-  vfirst: Float64Array;
-  vlast: Float64Array;
+export interface HourSummaries extends SummaryColumns {
   /** Start of the earliest 15-minute bucket holding the hour's minimum (maximum). */
   tmin: Float64Array;
   tmax: Float64Array;

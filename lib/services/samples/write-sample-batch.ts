@@ -21,12 +21,12 @@
 import type pg from "pg";
 import { from as copyFrom } from "pg-copy-streams";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
-import { encodeBlockRows, encodeCopyHeader, encodeCopyTrailer, encodeHourlyRows, encodeRollupRows } from "./encode-copy-binary";
+import { encodeBlockRows, encodeCopyHeader, encodeCopyTrailer, encodeSummaryRows } from "./encode-copy-binary";
 import { ensureSamplePartitions } from "./ensure-partitions";
 import { findBlocks, HOUR_MS, pickBlocks, type Blocks } from "./find-blocks";
 import { bumpSeriesVersions, refreshHourlyRollup } from "./refresh-hourly-rollup";
 import { isSortedByKey, sortByKey } from "./sort-by-key";
-import { summarizeBuckets, summarizeHours, type BucketSummaries, type HourSummaries } from "./summarize-buckets";
+import { summarizeBuckets, summarizeHours, type SummaryColumns } from "./summarize-buckets";
 
 export interface SampleWriteResult {
   /** Values written: new (well, signal, t) keys plus stored keys whose value differed and was replaced. */
@@ -83,12 +83,8 @@ function* blockPieces(batch: ValueColumns<number>, blocks: Blocks, which: readon
   for (let i = 0; i < which.length; i += BLOCKS_PER_CHUNK) yield encodeBlockRows(batch, blocks, which.slice(i, i + BLOCKS_PER_CHUNK));
 }
 
-function* rollupPieces(s: BucketSummaries): Generator<Buffer> {
-  for (let i = 0; i < s.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeRollupRows(s, i, Math.min(s.length, i + ROLLUP_ROWS_PER_CHUNK));
-}
-
-function* hourlyPieces(s: HourSummaries): Generator<Buffer> {
-  for (let i = 0; i < s.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeHourlyRows(s, i, Math.min(s.length, i + ROLLUP_ROWS_PER_CHUNK));
+function* summaryPieces(s: SummaryColumns, times: readonly [Float64Array, Float64Array]): Generator<Buffer> {
+  for (let i = 0; i < s.length; i += ROLLUP_ROWS_PER_CHUNK) yield encodeSummaryRows(s, times, i, Math.min(s.length, i + ROLLUP_ROWS_PER_CHUNK));
 }
 
 // Which blocks are stored: LATERAL … LIMIT 1 keeps it one primary-key probe per
@@ -199,10 +195,11 @@ async function insertNewHours(client: pg.ClientBase, batch: ValueColumns<number>
   await copyPieces(client, "COPY sample_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, fresh));
   const freshValues = fresh.length === blocks.length ? batch : pickBlocks(batch, blocks, fresh);
   const quarters = summarizeBuckets(freshValues);
+  const hours = summarizeHours(quarters);
   await client.query("SAVEPOINT rollup");
   try {
-    await copyPieces(client, "COPY samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast) FROM STDIN (FORMAT binary)", rollupPieces(quarters));
-    await copyPieces(client, "COPY samples_1h (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tmin, tmax) FROM STDIN (FORMAT binary)", hourlyPieces(summarizeHours(quarters)));
+    await copyPieces(client, "COPY samples_15m (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tfirst, tlast) FROM STDIN (FORMAT binary)", summaryPieces(quarters, [quarters.tfirst, quarters.tlast]));
+    await copyPieces(client, "COPY samples_1h (well_id, signal, bucket, n, vmin, vmax, vsum, vfirst, vlast, tmin, tmax) FROM STDIN (FORMAT binary)", summaryPieces(hours, [hours.tmin, hours.tmax]));
   } catch (e) {
     // A rollup row without stored values (left by a manual delete): rebuild those hours.
     if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
