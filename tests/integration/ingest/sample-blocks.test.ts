@@ -7,6 +7,7 @@ import type pg from "pg";
 import { closeDb, makeOrg, type TestOrg } from "../helpers";
 import { openSampleClient } from "@/lib/services/samples/sample-db";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
+import { ensureSamplePartitions, forgetKnownPartitions } from "@/lib/services/samples/ensure-partitions";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { addWell, sql } from "./ingest-fixtures";
 
@@ -92,5 +93,23 @@ describe("sample hour blocks", () => {
     const r = await writeSampleBatch(client, batch(minutes(2, 0, 20, (m) => 40 + m)));
     expect(r.written).toBe(20);
     expect(await rollupMismatches()).toBe(0);
+  });
+
+  it("several sessions creating the same new month at once all succeed", async () => {
+    const month = Date.UTC(2027, 5, 10); // within the year ahead that gets partitions
+    const clients = await Promise.all(Array.from({ length: 6 }, () => openSampleClient()));
+    try {
+      for (let round = 0; round < 3; round++) {
+        await sql(`DROP TABLE IF EXISTS sample_blocks_2027m06`);
+        forgetKnownPartitions();
+        await Promise.all(clients.map((c) => ensureSamplePartitions(c, month, month)));
+        const [r] = await sql<{ name: string | null }>(`SELECT to_regclass('sample_blocks_2027m06')::text AS name`);
+        expect(r.name).toBe("sample_blocks_2027m06");
+      }
+    } finally {
+      await sql(`DROP TABLE IF EXISTS sample_blocks_2027m06`);
+      forgetKnownPartitions();
+      await Promise.all(clients.map((c) => c.end()));
+    }
   });
 });
