@@ -3,8 +3,9 @@
 // Used for hours with no stored values yet (see write-sample-batch.ts), whose
 // rollup rows can then be inserted as they are.
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
+import { hourOf } from "./find-blocks";
 
-export const BUCKET_MS = 15 * 60_000;
+const BUCKET_MS = 15 * 60_000;
 
 /** Rollup rows as parallel typed arrays: what samples_15m and samples_1h rows share. */
 export interface SummaryColumns {
@@ -79,8 +80,6 @@ export interface HourSummaries extends SummaryColumns {
   tmax: Float64Array;
 }
 
-const HOUR_MS = 3_600_000;
-const hourOfBucket = (t: number) => Math.floor(t / HOUR_MS) * HOUR_MS;
 
 /**
  * The hourly rows from a batch's 15-minute rows (in key order): counts and sums add,
@@ -91,7 +90,7 @@ const hourOfBucket = (t: number) => Math.floor(t / HOUR_MS) * HOUR_MS;
 export function summarizeHours(q: BucketSummaries): HourSummaries {
   let m = 0;
   const isNewHour = (k: number) =>
-    k === 0 || q.wellId[k] !== q.wellId[k - 1] || q.signal[k] !== q.signal[k - 1] || hourOfBucket(q.bucket[k]) !== hourOfBucket(q.bucket[k - 1]);
+    k === 0 || q.wellId[k] !== q.wellId[k - 1] || q.signal[k] !== q.signal[k - 1] || hourOf(q.bucket[k]) !== hourOf(q.bucket[k - 1]);
   for (let k = 0; k < q.length; k++) if (isNewHour(k)) m++;
   const out: HourSummaries = {
     length: m, wellId: new Int32Array(m), signal: new Uint8Array(m), bucket: new Float64Array(m), n: new Int32Array(m),
@@ -104,7 +103,7 @@ export function summarizeHours(q: BucketSummaries): HourSummaries {
       h++;
       out.wellId[h] = q.wellId[k];
       out.signal[h] = q.signal[k];
-      out.bucket[h] = hourOfBucket(q.bucket[k]);
+      out.bucket[h] = hourOf(q.bucket[k]);
       out.n[h] = q.n[k];
       out.vmin[h] = q.vmin[k];
       out.vmax[h] = q.vmax[k];

@@ -204,13 +204,18 @@ async function insertNewHours(client: pg.ClientBase, batch: ValueColumns<number>
     // A rollup row without stored values (left by a manual delete): rebuild those hours.
     if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
     await client.query("ROLLBACK TO SAVEPOINT rollup");
-    const r = hourRanges(blocks, fresh);
-    await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
-    await refreshHourlyRollup(client, { wellIds: r.wellIds, signals: r.signals, los: r.los.map((t) => new Date(t)), his: r.his.map((t) => new Date(t)) });
+    await rebuildRollups(client, blocks, fresh);
   }
   // The web app's chart cache checks these versions.
   const series = seriesOf(blocks, fresh);
   await bumpSeriesVersions(client, series.wellIds, series.signals);
+}
+
+/** Recompute the chosen blocks' hours in both rollups from the stored blocks (the hourly step also renews the series' versions). */
+async function rebuildRollups(client: pg.ClientBase, blocks: Blocks, which: readonly number[]): Promise<void> {
+  const r = hourRanges(blocks, which);
+  await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
+  await refreshHourlyRollup(client, { wellIds: r.wellIds, signals: r.signals, los: r.los.map((t) => new Date(t)), his: r.his.map((t) => new Date(t)) });
 }
 
 /** The distinct series of some blocks (blocks are in key order). */
@@ -233,9 +238,7 @@ async function mergeStoredHours(client: pg.ClientBase, batch: ValueColumns<numbe
   // Nothing changed → no bucket changed; skip the rollup reads. Otherwise the merged
   // hours' quarters, then their hourly rows (which also renews the series' versions).
   if (written > 0) {
-    const r = hourRanges(blocks, stored);
-    await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
-    await refreshHourlyRollup(client, { wellIds: r.wellIds, signals: r.signals, los: r.los.map((t) => new Date(t)), his: r.his.map((t) => new Date(t)) });
+    await rebuildRollups(client, blocks, stored);
   }
   return written;
 }
