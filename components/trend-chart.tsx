@@ -9,6 +9,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import type { Signal } from "@/lib/signals";
 import { DISPLAY_UNITS, displayValue, type UnitSystem } from "@/lib/units/units";
 import type { TrendData } from "@/lib/trends/trend-types";
+import { decodeTrendData, type WireTrendData } from "@/lib/trends/trend-wire";
 import { CHART_PANELS } from "@/lib/trends/chart-panels";
 import { alignSeries, convertValues } from "@/lib/trends/align-series";
 import { formatBucket, formatFieldTime, scaleRange, shiftRange } from "@/lib/trends/chart-time";
@@ -47,7 +48,7 @@ async function fetchTrend(wellId: number, from: number, to: number, width: numbe
     const body = (await res.json().catch(() => null)) as { error?: { message?: string } } | null;
     throw new Error(body?.error?.message ?? `The trend could not be loaded (${res.status})`);
   }
-  return (await res.json()) as TrendData;
+  return decodeTrendData((await res.json()) as WireTrendData);
 }
 
 function TrendChartView({ wellId, from, to, timeZone, unitSystem, highlightIssueId, height = 180 }: TrendChartProps) {

@@ -221,12 +221,12 @@ async function main() {
   if (!isKeep) {
     const ids = wells.map((w) => w.id);
     await sequelize.query(`DELETE FROM sample_blocks WHERE well_id IN (:ids)`, { replacements: { ids } });
-    for (const table of ["samples_15m", "samples_1h", "sample_series_versions"]) {
+    for (const table of ["samples_15m", "samples_1h", "samples_3h", "sample_series_versions"]) {
       await sequelize.query(`DELETE FROM ${table} WHERE well_id IN (:ids)`, { replacements: { ids } });
     }
     // Reclaim the deleted rows now: left to autovacuum, the next run would insert into
     // half-empty pages all over the tables and measure that instead.
-    await sequelize.query(`VACUUM (ANALYZE) sample_blocks, samples_15m, samples_1h, sample_series_versions`);
+    await sequelize.query(`VACUUM (ANALYZE) sample_blocks, samples_15m, samples_1h, samples_3h, sample_series_versions`);
     for (const u of await Upload.findAll({ where: { organization_id: org.id } })) {
       await getStorage().delete(u.storage_key);
       if (u.rejections_key) await getStorage().delete(u.rejections_key);

@@ -1,7 +1,7 @@
 // Regression values of our own reduction choices (not validation against an outside
 // source): two points per pixel column, at most 2,000 per signal.
 import { describe, expect, it } from "vitest";
-import { HOURLY_BUCKET_MS, MINUTE_MS, ROLLUP_BUCKET_MS, chooseBucketMs, chooseBucketSource, planBuckets, pointCap } from "./bucket-plan";
+import { HOURLY_BUCKET_MS, MINUTE_MS, ROLLUP_BUCKET_MS, SOURCE_ROW_MS, THREE_HOUR_BUCKET_MS, chooseBucketMs, chooseBucketSource, planBuckets, pointCap } from "./bucket-plan";
 
 const DAY = 1440 * MINUTE_MS;
 
@@ -40,14 +40,16 @@ describe("chooseBucketSource", () => {
     [15 * MINUTE_MS, "rollup"],
     [30 * MINUTE_MS, "rollup"],
     [60 * MINUTE_MS, "hourly"],
-    [180 * MINUTE_MS, "hourly"],
-    [1440 * MINUTE_MS, "hourly"],
-    [2 * DAY, "hourly"],
+    [120 * MINUTE_MS, "hourly"],
+    [180 * MINUTE_MS, "three_hourly"],
+    [360 * MINUTE_MS, "three_hourly"],
+    [1440 * MINUTE_MS, "three_hourly"],
+    [2 * DAY, "three_hourly"],
   ] as const)("a %s ms bucket → %s", (bucketMs, source) => expect(chooseBucketSource(bucketMs)).toBe(source));
   it("names a table for every bucket length we use, never a coarser one than the bucket", () => {
     for (const range of [3600_000, DAY, 7 * DAY, 90 * DAY, 730 * DAY]) {
       const b = chooseBucketMs(range, 2000);
-      const rowMs = { samples: 1, rollup: ROLLUP_BUCKET_MS, hourly: HOURLY_BUCKET_MS }[chooseBucketSource(b)];
+      const rowMs = SOURCE_ROW_MS[chooseBucketSource(b)];
       expect(b % rowMs).toBe(0);
     }
   });
@@ -58,10 +60,13 @@ describe("planBuckets", () => {
   it("returns raw values when the densest signal fits under the cap", () => {
     expect(planBuckets({ fromMs: from, toMs: from + 2 * 3600_000, widthPx: 1200, maxRawCount: 120 })).toEqual({ resolution: "raw", bucketMs: 0, source: null, cap: 2000 });
   });
-  it("reads long ranges from the hourly rollup", () => {
+  it("reads 90 days from the 3-hour rollup, one stored row per bucket", () => {
     const p = planBuckets({ fromMs: from, toMs: from + 90 * DAY, widthPx: 1200, maxRawCount: 129_600 });
-    expect(p).toMatchObject({ resolution: "minmax", source: "hourly", bucketMs: 180 * MINUTE_MS });
-    expect(p.bucketMs % HOURLY_BUCKET_MS).toBe(0);
+    expect(p).toMatchObject({ resolution: "minmax", source: "three_hourly", bucketMs: THREE_HOUR_BUCKET_MS });
+  });
+  it("reads 30 days from the hourly rollup", () => {
+    const p = planBuckets({ fromMs: from, toMs: from + 30 * DAY, widthPx: 1200, maxRawCount: 43_200 });
+    expect(p).toMatchObject({ resolution: "minmax", source: "hourly", bucketMs: HOURLY_BUCKET_MS });
   });
   it("reads a week from the 15-minute rollup", () => {
     const p = planBuckets({ fromMs: from, toMs: from + 7 * DAY, widthPx: 1200, maxRawCount: 10_080 });

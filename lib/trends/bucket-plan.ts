@@ -9,6 +9,8 @@ export const MINUTE_MS = 60_000;
 export const ROLLUP_BUCKET_MS = 15 * MINUTE_MS;
 /** The hourly rollup's bucket (samples_1h, built from samples_15m). */
 export const HOURLY_BUCKET_MS = 60 * MINUTE_MS;
+/** The 3-hour rollup's bucket (samples_3h, built from samples_1h): a 90-day chart's bucket. */
+export const THREE_HOUR_BUCKET_MS = 3 * HOURLY_BUCKET_MS;
 /** Hard cap on points per signal, whatever the width asked for. */
 export const MAX_POINTS_PER_SIGNAL = 2000;
 export const DEFAULT_WIDTH_PX = 1200;
@@ -25,8 +27,16 @@ export const NICE_BUCKETS_MS: readonly number[] = [
 ];
 
 export type Resolution = "raw" | "minmax";
-/** samples: the stored values; rollup: samples_15m; hourly: samples_1h. */
-export type BucketSource = "samples" | "rollup" | "hourly";
+/** samples: the stored values; rollup: samples_15m; hourly: samples_1h; three_hourly: samples_3h. */
+export type BucketSource = "samples" | "rollup" | "hourly" | "three_hourly";
+
+/** The length of one stored row of each source (1 ms for the samples themselves). */
+export const SOURCE_ROW_MS: Record<BucketSource, number> = {
+  samples: 1,
+  rollup: ROLLUP_BUCKET_MS,
+  hourly: HOURLY_BUCKET_MS,
+  three_hourly: THREE_HOUR_BUCKET_MS,
+};
 
 export interface BucketPlan {
   resolution: Resolution;
@@ -55,10 +65,11 @@ export function chooseBucketMs(rangeMs: number, cap: number): number {
 
 /**
  * The coarsest table whose buckets divide `bucketMs`, so the fewest rows are read:
- * the hourly rollup for buckets of whole hours, the 15-minute rollup for whole
- * quarter hours, the samples themselves for shorter buckets.
+ * the 3-hour rollup for buckets of whole 3 hours, the hourly rollup for whole hours,
+ * the 15-minute rollup for whole quarter hours, the samples for shorter buckets.
  */
 export function chooseBucketSource(bucketMs: number): BucketSource {
+  if (bucketMs % THREE_HOUR_BUCKET_MS === 0) return "three_hourly";
   if (bucketMs % HOURLY_BUCKET_MS === 0) return "hourly";
   if (bucketMs % ROLLUP_BUCKET_MS === 0) return "rollup";
   return "samples";

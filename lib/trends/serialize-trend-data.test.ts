@@ -1,10 +1,13 @@
-// The pre-encoded answer must be exactly JSON.stringify's bytes (the chart parses it
-// with JSON.parse); regression checks of our own serializer, no outside source.
+// The pre-encoded answer must be exactly JSON.stringify's bytes of the wire form (the
+// chart parses it with JSON.parse and decodes it with decodeTrendData); regression
+// checks of our own serializer, no outside source.
 import { describe, expect, it } from "vitest";
 import { serializeTrendData } from "./serialize-trend-data";
 import type { TrendData, TrendSeries } from "./trend-types";
+import { decodeTrendData, toWireSeries } from "./trend-wire";
 
 const decode = (b: Uint8Array) => new TextDecoder().decode(b);
+const wire = (d: TrendData) => JSON.stringify({ ...d, series: d.series.map(toWireSeries) });
 
 function makeData(series: TrendSeries[]): TrendData {
   return {
@@ -32,16 +35,21 @@ const series = (): TrendSeries[] => [
 describe("serializeTrendData", () => {
   it("gives exactly JSON.stringify's text, full precision and nulls included", () => {
     const d = makeData(series());
-    expect(decode(serializeTrendData(d))).toBe(JSON.stringify(d));
+    expect(decode(serializeTrendData(d))).toBe(wire(d));
+  });
+
+  it("decodes back to the answer the service built", () => {
+    const d = makeData(series());
+    expect(decodeTrendData(JSON.parse(decode(serializeTrendData(d))))).toEqual(d);
   });
 
   it("reuses a frozen series list's bytes and still writes the current overlays", () => {
     const list = Object.freeze(series()) as TrendSeries[];
     const first = makeData(list);
-    expect(decode(serializeTrendData(first))).toBe(JSON.stringify(first));
+    expect(decode(serializeTrendData(first))).toBe(wire(first));
     const second = makeData(list);
     second.overlays.issues = [];
-    expect(decode(serializeTrendData(second))).toBe(JSON.stringify(second));
+    expect(decode(serializeTrendData(second))).toBe(wire(second));
   });
 
   it("encodes an unfrozen list afresh each time (it may have changed)", () => {
@@ -49,6 +57,6 @@ describe("serializeTrendData", () => {
     const d = makeData(list);
     serializeTrendData(d);
     list[0].v[1] = 5;
-    expect(decode(serializeTrendData(d))).toBe(JSON.stringify(d));
+    expect(decode(serializeTrendData(d))).toBe(wire(d));
   });
 });

@@ -1,10 +1,10 @@
-// The trend answer as JSON bytes, byte for byte what JSON.stringify gives, but with
-// the series part (about 230 kB for 5 × 1,440 points) serialized once per series
-// list: the service hands out the same frozen list while its cached answer is
-// current (lib/services/trends/trend-sample-cache.ts), so a repeated chart only
-// serializes its small overlays. Full precision is kept: the bytes of each number
-// are JSON.stringify's own.
+// The trend answer as JSON bytes, in the wire form of trend-wire.ts (series times as
+// a start and steps): byte for byte JSON.stringify of that form, with the series
+// part serialized once per series list: the service hands out the same frozen list
+// while its cached answer is current (lib/services/trends/trend-sample-cache.ts), so
+// a repeated chart only serializes its small overlays.
 import type { TrendData, TrendSeries } from "./trend-types";
+import { toWireSeries } from "./trend-wire";
 
 const encoder = new TextEncoder();
 const seriesBytes = new WeakMap<readonly TrendSeries[], Uint8Array>();
@@ -12,14 +12,14 @@ const seriesBytes = new WeakMap<readonly TrendSeries[], Uint8Array>();
 function encodeSeries(series: readonly TrendSeries[]): Uint8Array {
   let bytes = seriesBytes.get(series);
   if (!bytes) {
-    bytes = encoder.encode(JSON.stringify(series));
+    bytes = encoder.encode(JSON.stringify(series.map(toWireSeries)));
     // Only frozen lists can be remembered: a list that may still change is encoded each time.
     if (Object.isFrozen(series)) seriesBytes.set(series, bytes);
   }
   return bytes;
 }
 
-/** JSON.stringify(data) as UTF-8, reusing the encoded series of a frozen series list. */
+/** JSON.stringify of the wire form of `data` as UTF-8, reusing the encoded series of a frozen series list. */
 export function serializeTrendData(data: TrendData): Uint8Array<ArrayBuffer> {
   // Same key order as TrendData (and as JSON.stringify of the object the service builds).
   const head = encoder.encode(

@@ -3,7 +3,7 @@
 // pg connection of its own (a Client for a worker job, a small Pool for the API).
 import pg from "pg";
 
-const g = globalThis as unknown as { __bellowsSamplePool?: pg.Pool };
+const g = globalThis as unknown as { __bellowsSamplePool?: pg.Pool; __bellowsChartPool?: pg.Pool };
 
 // JIT compilation cost ~1 s per rollup statement here (the planner's cost estimate
 // over all partitions is high while the real work is a few index range scans).
@@ -27,4 +27,17 @@ export function getSamplePool(): pg.Pool {
     g.__bellowsSamplePool.on("error", () => undefined);
   }
   return g.__bellowsSamplePool;
+}
+
+/**
+ * A pool for the chart's reads, apart from the write pool above, so a chart never
+ * waits for a connection behind a long API write. Its size only needs to cover the
+ * CPUs: more concurrent reads than cores just queue inside PostgreSQL.
+ */
+export function getChartPool(): pg.Pool {
+  if (!g.__bellowsChartPool) {
+    g.__bellowsChartPool = new pg.Pool({ connectionString: databaseUrl(), max: Number(process.env.CHART_POOL_MAX ?? 6), application_name: "bellows-charts", options: CONNECTION_OPTIONS });
+    g.__bellowsChartPool.on("error", () => undefined);
+  }
+  return g.__bellowsChartPool;
 }

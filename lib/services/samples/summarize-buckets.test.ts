@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { summarizeBuckets, summarizeHours } from "./summarize-buckets";
+import { summarizeBuckets, summarizeHours, summarizeThreeHours } from "./summarize-buckets";
 
 const MIN = 60_000;
 const T0 = Date.UTC(2026, 0, 5, 6, 0); // a bucket boundary (whole quarter hour)
@@ -72,5 +72,36 @@ describe("summarizeHours", () => {
     expect([...h.tmax]).toEqual([T0 + 30 * MIN, T0 + 60 * MIN, T0]);
     expect([...h.vfirst]).toEqual([10, 5, 9]);
     expect([...h.vlast]).toEqual([3, 5, 9]);
+  });
+});
+
+// 3-hour rows from hourly rows: the same definitions over each 3-hour bin (bins from
+// 2000-01-01 UTC; 06:00 UTC starts one), worked by hand; the time of an extreme is the
+// earliest on a tie, first/last come from the earliest/latest hour.
+describe("summarizeThreeHours", () => {
+  const H = 60 * MIN;
+  it("combines the hours of each 3-hour bin and records its first and last hour", () => {
+    const s = summarizeThreeHours(summarizeHours(summarizeBuckets(batch([
+      [7, 1, T0, 10],
+      [7, 1, T0 + H + 20 * MIN, 2],
+      [7, 1, T0 + 2 * H + 40 * MIN, 2],
+      [7, 1, T0 + 2 * H + 50 * MIN, 30],
+      [7, 1, T0 + 3 * H, 5],
+      [8, 1, T0 + H, 9],
+    ]))));
+    expect(s.length).toBe(3);
+    expect([...s.wellId]).toEqual([7, 7, 8]);
+    expect([...s.bucket]).toEqual([T0, T0 + 3 * H, T0]);
+    expect([...s.n]).toEqual([4, 1, 1]);
+    expect([...s.vmin]).toEqual([2, 5, 9]);
+    expect([...s.vmax]).toEqual([30, 5, 9]);
+    expect([...s.vsum]).toEqual([44, 5, 9]);
+    expect([...s.vfirst]).toEqual([10, 5, 9]);
+    expect([...s.vlast]).toEqual([30, 5, 9]);
+    // The minimum 2 appears twice: the earlier quarter (01:15) wins.
+    expect([...s.tmin]).toEqual([T0 + H + 15 * MIN, T0 + 3 * H, T0 + H]);
+    expect([...s.tmax]).toEqual([T0 + 2 * H + 45 * MIN, T0 + 3 * H, T0 + H]);
+    expect([...s.hfirst]).toEqual([T0, T0 + 3 * H, T0 + H]);
+    expect([...s.hlast]).toEqual([T0 + 2 * H, T0 + 3 * H, T0 + H]);
   });
 });

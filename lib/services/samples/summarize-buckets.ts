@@ -123,3 +123,59 @@ export function summarizeHours(q: BucketSummaries): HourSummaries {
   }
   return out;
 }
+
+/** One samples_3h row per (well, signal, 3-hour bucket) (migration 20261202000007). */
+export interface ThreeHourSummaries extends HourSummaries {
+  /** Start of the earliest and of the latest hour in the row. */
+  hfirst: Float64Array;
+  hlast: Float64Array;
+}
+
+const THREE_HOURS_MS = 3 * 3_600_000;
+/** 3-hour buckets bin from 2000-01-01 UTC, a whole number of 3 hours from the Unix epoch. */
+const threeHourOf = (t: number) => Math.floor(t / THREE_HOURS_MS) * THREE_HOURS_MS;
+
+/**
+ * The 3-hour rows from a batch's hourly rows (in key order), as the SQL refresh in
+ * refresh-three-hour-rollup.ts defines them: counts and sums add, min/max combine
+ * (the earliest time on a tie), first/last come from the earliest/latest hour.
+ */
+export function summarizeThreeHours(h: HourSummaries): ThreeHourSummaries {
+  let m = 0;
+  const isNew = (k: number) =>
+    k === 0 || h.wellId[k] !== h.wellId[k - 1] || h.signal[k] !== h.signal[k - 1] || threeHourOf(h.bucket[k]) !== threeHourOf(h.bucket[k - 1]);
+  for (let k = 0; k < h.length; k++) if (isNew(k)) m++;
+  const out: ThreeHourSummaries = {
+    length: m, wellId: new Int32Array(m), signal: new Uint8Array(m), bucket: new Float64Array(m), n: new Int32Array(m),
+    vmin: new Float64Array(m), vmax: new Float64Array(m), vsum: new Float64Array(m), vfirst: new Float64Array(m), vlast: new Float64Array(m),
+    tmin: new Float64Array(m), tmax: new Float64Array(m), hfirst: new Float64Array(m), hlast: new Float64Array(m),
+  };
+  let j = -1;
+  for (let k = 0; k < h.length; k++) {
+    if (isNew(k)) {
+      j++;
+      out.wellId[j] = h.wellId[k];
+      out.signal[j] = h.signal[k];
+      out.bucket[j] = threeHourOf(h.bucket[k]);
+      out.n[j] = h.n[k];
+      out.vmin[j] = h.vmin[k];
+      out.vmax[j] = h.vmax[k];
+      out.vsum[j] = h.vsum[k];
+      out.vfirst[j] = h.vfirst[k];
+      out.vlast[j] = h.vlast[k];
+      out.tmin[j] = h.tmin[k];
+      out.tmax[j] = h.tmax[k];
+      out.hfirst[j] = h.bucket[k];
+      out.hlast[j] = h.bucket[k];
+      continue;
+    }
+    out.n[j] += h.n[k];
+    out.vsum[j] += h.vsum[k];
+    // Hours come in time order, so a later hour's extreme replaces only a strictly better one.
+    if (h.vmin[k] < out.vmin[j]) { out.vmin[j] = h.vmin[k]; out.tmin[j] = h.tmin[k]; }
+    if (h.vmax[k] > out.vmax[j]) { out.vmax[j] = h.vmax[k]; out.tmax[j] = h.tmax[k]; }
+    out.vlast[j] = h.vlast[k];
+    out.hlast[j] = h.bucket[k];
+  }
+  return out;
+}

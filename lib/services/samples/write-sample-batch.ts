@@ -6,14 +6,17 @@
 //      (one index probe each), then insert the new ones and merge the rest;
 //   2. new hours: binary COPY of the blocks, and of their 15-minute and hourly rollup
 //      rows computed here (summarize-buckets.ts): an hour with no stored values has no
-//      rollup rows yet, so all are plain inserts, the cheapest write PostgreSQL has;
+//      rollup rows yet, so all are plain inserts, the cheapest write PostgreSQL has.
+//      Their 3-hour buckets may hold hours of earlier batches, so the new hours'
+//      3-hour parts are added to the stored rows (refresh-three-hour-rollup.ts);
 //   3. stored hours: the batch's blocks go to a per-connection TEMP staging table and
 //      are merged into the stored ones by time: the later value of a time wins,
 //      identical values are not rewritten (so re-importing a file changes nothing and
-//      counts its values as unchanged), and the merged hours' rollup rows are
-//      recomputed from the stored blocks;
+//      counts its values as unchanged), and the merged hours' rollup rows (15-minute,
+//      hourly, 3-hour) are recomputed from the stored blocks;
 //   4. every written series gets a new version (sample_series_versions), which tells
-//      the web app's chart cache that its answers for the series are out of date.
+//      the web app's chart cache that its answers for the series are out of date; it
+//      rides in the 3-hour statement.
 //
 // The batch must hold each (well, signal, t) at most once (readRows and the API
 // service both merge in-batch duplicates first). Rows go in key order; a deadlock
@@ -24,9 +27,11 @@ import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { encodeBlockRows, encodeCopyHeader, encodeCopyTrailer, encodeSummaryRows } from "./encode-copy-binary";
 import { ensureSamplePartitions } from "./ensure-partitions";
 import { findBlocks, HOUR_MS, pickBlocks, type Blocks } from "./find-blocks";
-import { bumpSeriesVersions, refreshHourlyRollup } from "./refresh-hourly-rollup";
+import type { SeriesRanges } from "./merge-series-ranges";
+import { refreshHourlyRollup } from "./refresh-hourly-rollup";
+import { addThreeHourParts } from "./refresh-three-hour-rollup";
 import { isSortedByKey, sortByKey } from "./sort-by-key";
-import { summarizeBuckets, summarizeHours, type SummaryColumns } from "./summarize-buckets";
+import { summarizeBuckets, summarizeHours, summarizeThreeHours, type SummaryColumns } from "./summarize-buckets";
 
 export interface SampleWriteResult {
   /** Values written: new (well, signal, t) keys plus stored keys whose value differed and was replaced. */
@@ -147,17 +152,9 @@ ON CONFLICT (well_id, signal, bucket) DO UPDATE
 SET n = EXCLUDED.n, vmin = EXCLUDED.vmin, vmax = EXCLUDED.vmax, vsum = EXCLUDED.vsum,
     vfirst = EXCLUDED.vfirst, vlast = EXCLUDED.vlast, tfirst = EXCLUDED.tfirst, tlast = EXCLUDED.tlast`;
 
-/** Per-series ranges (15-minute aligned, epoch ms) for ROLLUP_SQL. */
-interface Ranges {
-  wellIds: number[];
-  signals: number[];
-  los: number[];
-  his: number[];
-}
-
-/** Each chosen block's hour as a range. */
-function hourRanges(blocks: Blocks, which: readonly number[]): Ranges {
-  const r: Ranges = { wellIds: [], signals: [], los: [], his: [] };
+/** Each chosen block's hour as a range (epoch ms, in key order as the blocks are). */
+function hourRanges(blocks: Blocks, which: readonly number[]): SeriesRanges {
+  const r: SeriesRanges = { wellIds: [], signals: [], los: [], his: [] };
   for (const k of which) {
     r.wellIds.push(blocks.wellId[k]);
     r.signals.push(blocks.signal[k]);
@@ -190,7 +187,11 @@ export interface SampleWriteOptions {
   isFlushDeferred?: boolean;
 }
 
-/** New hours: COPY the blocks, then their 15-minute and hourly rollup rows (recomputed instead if a stray row is in the way). */
+/**
+ * New hours: COPY the blocks, then their 15-minute and hourly rollup rows (recomputed
+ * instead if a stray row is in the way), then their 3-hour buckets and the series'
+ * versions in one statement.
+ */
 async function insertNewHours(client: pg.ClientBase, batch: ValueColumns<number>, blocks: Blocks, fresh: number[]): Promise<void> {
   await copyPieces(client, "COPY sample_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, fresh));
   const freshValues = fresh.length === blocks.length ? batch : pickBlocks(batch, blocks, fresh);
@@ -205,29 +206,18 @@ async function insertNewHours(client: pg.ClientBase, batch: ValueColumns<number>
     if (codeOf(e) !== UNIQUE_VIOLATION) throw e;
     await client.query("ROLLBACK TO SAVEPOINT rollup");
     await rebuildRollups(client, blocks, fresh);
+    return;
   }
-  // The web app's chart cache checks these versions.
-  const series = seriesOf(blocks, fresh);
-  await bumpSeriesVersions(client, series.wellIds, series.signals);
+  // The new hours' 3-hour parts join the stored 3-hour rows, with the new versions
+  // the web app's chart cache checks (one statement).
+  await addThreeHourParts(client, summarizeThreeHours(hours));
 }
 
-/** Recompute the chosen blocks' hours in both rollups from the stored blocks (the hourly step also renews the series' versions). */
+/** Recompute the chosen blocks' hours in all rollups from the stored blocks (the last step also renews the series' versions). */
 async function rebuildRollups(client: pg.ClientBase, blocks: Blocks, which: readonly number[]): Promise<void> {
   const r = hourRanges(blocks, which);
   await client.query(ROLLUP_SQL, [r.wellIds, r.signals, r.los, r.his]);
   await refreshHourlyRollup(client, { wellIds: r.wellIds, signals: r.signals, los: r.los.map((t) => new Date(t)), his: r.his.map((t) => new Date(t)) });
-}
-
-/** The distinct series of some blocks (blocks are in key order). */
-function seriesOf(blocks: Blocks, which: readonly number[]): { wellIds: number[]; signals: number[] } {
-  const out = { wellIds: [] as number[], signals: [] as number[] };
-  for (const k of which) {
-    const n = out.wellIds.length;
-    if (n > 0 && out.wellIds[n - 1] === blocks.wellId[k] && out.signals[n - 1] === blocks.signal[k]) continue;
-    out.wellIds.push(blocks.wellId[k]);
-    out.signals.push(blocks.signal[k]);
-  }
-  return out;
 }
 
 /** Stored hours: stage the blocks, merge them in by time, recompute the merged hours' buckets. */
@@ -236,7 +226,7 @@ async function mergeStoredHours(client: pg.ClientBase, batch: ValueColumns<numbe
   await copyPieces(client, "COPY ingest_stage_blocks (well_id, signal, hour, ts, vs) FROM STDIN (FORMAT binary)", blockPieces(batch, blocks, stored));
   const written = (await client.query<{ written: number }>(MERGE_SQL)).rows[0]?.written ?? 0;
   // Nothing changed → no bucket changed; skip the rollup reads. Otherwise the merged
-  // hours' quarters, then their hourly rows (which also renews the series' versions).
+  // hours' quarters, then their hourly and 3-hour rows (which also renews the series' versions).
   if (written > 0) {
     await rebuildRollups(client, blocks, stored);
   }

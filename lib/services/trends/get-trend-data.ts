@@ -13,12 +13,11 @@ import { DEFAULT_WIDTH_PX, chooseBucketMs, chooseBucketSource, planBuckets, poin
 import { breakGaps, toMinMaxPoints, type MinMaxBucket } from "@/lib/trends/minmax-points";
 import { formatOperatingValve, formatValveLabel } from "@/lib/trends/valve-label";
 import type { TrendData, TrendOperatingPoint, TrendSeries, TrendValveLine } from "@/lib/trends/trend-types";
-import { getSamplePool } from "@/lib/services/samples/sample-db";
+import { getChartPool } from "@/lib/services/samples/sample-db";
 import { countRawValues, readMinMaxBuckets, readRawValues, type SeriesQuery } from "./query-trend-series";
 import { RECENT_MEDIAN_CODES, readRecentMedians, type RecentMedians } from "./read-recent-medians";
 import { readSeriesVersions, readThroughCache } from "./trend-sample-cache";
-import { listFieldEventWindows, listIssueWindows } from "./list-trend-windows";
-import { readTrendWell } from "./read-trend-well";
+import { readTrendContext } from "./read-trend-context";
 
 /** The five signals of the chart's three panels. */
 export const DEFAULT_TREND_SIGNALS: readonly Signal[] = ["casing_pressure", "tubing_pressure", "injection_rate", "gas_rate", "liquid_rate"];
@@ -45,24 +44,18 @@ export async function getTrendData(actor: Actor, wellId: number, req: TrendReque
   }
   const signals = [...new Set(req.signals && req.signals.length > 0 ? req.signals : DEFAULT_TREND_SIGNALS)];
   const widthPx = req.width ?? DEFAULT_WIDTH_PX;
-  const db = getSamplePool();
+  const db = getChartPool();
   const q: SeriesQuery = { wellId, codes: signals.map((s) => SIGNAL_CODE[s]), fromMs: from, toMs: to };
   const scope = { organizationId: actor.organizationId, wellId, fromMs: from, toMs: to };
 
-  // The reads are independent, so they run side by side. readTrendWell answers 404
-  // for another organization's well; the sample reads (samples carry no organization)
-  // start alongside it, and their results are dropped, never returned, when it does.
-  // Issue windows are scoped by organization themselves.
-  const wellRead = readTrendWell(actor.organizationId, wellId);
-  const [well, { reduced, recent }, issues, fieldEvents] = await Promise.all([
-    wellRead,
-    readSamplePart(db, q, signals, widthPx),
-    listIssueWindows(scope),
-    wellRead.then((w) => listFieldEventWindows({ ...scope, padId: w.padId })),
-  ]);
+  // The reads are independent, so they run side by side. readTrendContext answers
+  // 404 for another organization's well; the sample reads (samples carry no
+  // organization) start alongside it, and their results are dropped, never
+  // returned, when it does.
+  const [well, { reduced, recent }] = await Promise.all([readTrendContext(db, scope), readSamplePart(db, q, signals, widthPx)]);
 
   return {
-    wellId: well.id,
+    wellId: well.wellId,
     from,
     to,
     resolution: reduced.plan.resolution,
@@ -72,8 +65,8 @@ export async function getTrendData(actor: Actor, wellId: number, req: TrendReque
       recent,
       valves: readValveLines(well.design, recent),
       operatingPoint: readOperatingPoint(well.design, recent),
-      issues,
-      fieldEvents,
+      issues: well.issues,
+      fieldEvents: well.fieldEvents,
     },
   };
 }

@@ -6,6 +6,12 @@
 // primary-key read; a miss costs what an uncached request costs plus that read.
 // Issues, field events and the well's valve design are not cached: they change
 // through other paths and are cheap to read.
+//
+// An answer is kept only when its key is asked for a second time (the first time
+// only the key is remembered): most ranges are drawn once, as every drag-zoom or pan
+// asks for a new one, and keeping each of those answers for a second or two meant
+// promoting ~200 kB of arrays per request to the old generation and collecting it
+// again there (measured under the dashboard bench).
 import type pg from "pg";
 
 /** About 64 charts of five signals at 2,000 points: a few tens of MB at most. */
@@ -16,8 +22,12 @@ interface Entry<T> {
   value: T;
 }
 
-const g = globalThis as unknown as { __bellowsTrendSampleCache?: Map<string, Entry<unknown>> };
+/** Keys asked for once, so a second request is recognised; forgotten all at once when full. */
+const MAX_SEEN = 4096;
+
+const g = globalThis as unknown as { __bellowsTrendSampleCache?: Map<string, Entry<unknown>>; __bellowsTrendSeenKeys?: Set<string> };
 const entries = (g.__bellowsTrendSampleCache ??= new Map());
+const seen = (g.__bellowsTrendSeenKeys ??= new Set());
 
 /**
  * The series' versions as one string, or null when a series has none (never written
@@ -35,8 +45,8 @@ export async function readSeriesVersions(db: pg.Pool | pg.ClientBase, wellId: nu
 }
 
 /**
- * The cached value for `key` if it was read at `version`; otherwise `read()` it and
- * keep it. `version` must be read before `read()` runs, so a write landing in
+ * The cached value for `key` if it was read at `version`; otherwise `read()` it, and
+ * keep it if `key` was asked for before. `version` must be read before `read()` runs, so a write landing in
  * between leaves an entry that the next request finds out of date (never the reverse).
  */
 export async function readThroughCache<T>(key: string, version: string | null, read: () => Promise<T>): Promise<T> {
@@ -50,7 +60,10 @@ export async function readThroughCache<T>(key: string, version: string | null, r
     }
   }
   const value = await read();
-  if (version !== null) {
+  if (version !== null && !seen.has(key)) {
+    if (seen.size >= MAX_SEEN) seen.clear();
+    seen.add(key);
+  } else if (version !== null) {
     entries.delete(key);
     entries.set(key, { version, value });
     while (entries.size > MAX_ENTRIES) entries.delete(entries.keys().next().value as string);
@@ -61,4 +74,5 @@ export async function readThroughCache<T>(key: string, version: string | null, r
 /** For tests: forget every cached answer. */
 export function clearTrendSampleCache(): void {
   entries.clear();
+  seen.clear();
 }

@@ -102,7 +102,7 @@ beforeAll(async () => {
 }, 60_000);
 
 afterAll(async () => {
-  for (const table of ["sample_blocks", "samples_15m", "samples_1h", "sample_series_versions"]) await client.query(`DELETE FROM ${table} WHERE well_id = $1`, [org.wellId]);
+  for (const table of ["sample_blocks", "samples_15m", "samples_1h", "samples_3h", "sample_series_versions"]) await client.query(`DELETE FROM ${table} WHERE well_id = $1`, [org.wellId]);
   await client.end();
   await getSamplePool().end();
   await closeDb();

@@ -9,15 +9,14 @@ import { FieldEvent, Issue, Mandrel } from "@/models";
 import { closeDb, makeOrg, type TestOrg } from "../helpers";
 import { getTrendData } from "@/lib/services/trends/get-trend-data";
 import { getWell } from "@/lib/services/wells/get-well";
-import { getSamplePool } from "@/lib/services/samples/sample-db";
 import { mandrelColumns } from "@/lib/services/wells/well-dto";
 import { valveSurfacePressures } from "@/lib/gaslift/operating-point";
 import { formatValveLabel } from "@/lib/trends/valve-label";
 import { AppError } from "@/lib/errors";
 import { readMinMaxBuckets } from "@/lib/services/trends/query-trend-series";
-import { readTrendWell } from "@/lib/services/trends/read-trend-well";
+import { readTrendContext } from "@/lib/services/trends/read-trend-context";
 import { clearTrendSampleCache } from "@/lib/services/trends/trend-sample-cache";
-import { openSampleClient } from "@/lib/services/samples/sample-db";
+import { getChartPool, getSamplePool, openSampleClient } from "@/lib/services/samples/sample-db";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { refreshHourlyRollupOf } from "./trend-fixtures";
 import { DAY, MINUTE, makeFixture, valueAt, writeFixture } from "./trend-fixtures";
@@ -59,8 +58,10 @@ afterAll(async () => {
   await getSamplePool().query("DELETE FROM sample_blocks WHERE well_id = $1", [org.wellId]);
   await getSamplePool().query("DELETE FROM samples_15m WHERE well_id = $1", [org.wellId]);
   await getSamplePool().query("DELETE FROM samples_1h WHERE well_id = $1", [org.wellId]);
+  await getSamplePool().query("DELETE FROM samples_3h WHERE well_id = $1", [org.wellId]);
   await getSamplePool().query("DELETE FROM sample_series_versions WHERE well_id = $1", [org.wellId]);
   await getSamplePool().end();
+  await getChartPool().end();
   await closeDb();
 });
 
@@ -114,13 +115,14 @@ describe("getTrendData", () => {
 
   it("reads the same valve design and pad as the well page (getWell)", async () => {
     const full = await getWell(org.actors.engineer, org.wellId);
-    const lean = await readTrendWell(org.organizationId, org.wellId);
+    const scope = { organizationId: org.organizationId, wellId: org.wellId, fromMs: fixture.start, toMs: END };
+    const lean = await readTrendContext(getSamplePool(), scope);
     // getWell's mandrels also carry their row id and install date, which the design does not use.
     const mandrels = full.design.mandrels.map((m) => ({
       position: m.position, mdFt: m.mdFt, tvdFt: m.tvdFt, kind: m.kind, portIn: m.portIn, valveOdIn: m.valveOdIn, rRatio: m.rRatio, tropsig: m.tropsig,
     }));
-    expect(lean).toEqual({ id: full.id, padId: full.padId, design: { ...full.design, mandrels } });
-    await expect(readTrendWell(other.organizationId, org.wellId)).rejects.toMatchObject({ code: "not_found" });
+    expect(lean).toMatchObject({ wellId: full.id, padId: full.padId, design: { ...full.design, mandrels } });
+    await expect(readTrendContext(getSamplePool(), { ...scope, organizationId: other.organizationId })).rejects.toMatchObject({ code: "not_found" });
   });
 
   it("answers 404 for another organization's well", async () => {
@@ -169,7 +171,7 @@ describe("which table a trend is read from", () => {
   /** The tables named in FROM clauses of the sample queries one getTrendData call runs. */
   async function tablesRead(from: number, to: number): Promise<Set<string>> {
     clearTrendSampleCache();
-    const pool = getSamplePool();
+    const pool = getChartPool();
     const spy = vi.spyOn(pool, "query");
     try {
       await getTrendData(org.actors.engineer, org.wellId, { from, to, width: 1200 });
@@ -180,10 +182,14 @@ describe("which table a trend is read from", () => {
     }
   }
 
-  it("reads 90 days (3-hour buckets) from the hourly rollup, and samples only for the recent medians", async () => {
+  it("reads 90 days (3-hour buckets) from the 3-hour rollup, and samples only for the recent medians", async () => {
     const tables = await tablesRead(fixture.start, END);
-    expect(tables.has("samples_1h")).toBe(true);
-    expect(tables.has("samples_15m")).toBe(false);
+    expect([...tables].sort()).toEqual(["samples", "samples_3h"]);
+  });
+
+  it("reads 30 days (1-hour buckets) from the hourly rollup", async () => {
+    const tables = await tablesRead(END - 30 * DAY, END);
+    expect([...tables].sort()).toEqual(["samples", "samples_1h"]);
   });
 
   it("reads 7 days (15-minute buckets) from the 15-minute rollup", async () => {
@@ -197,11 +203,13 @@ describe("which table a trend is read from", () => {
     expect([...tables].sort()).toEqual(["samples", "samples_15m"]);
   });
 
-  it("gives the same 3-hour buckets and counts from the hourly rollup as from the 15-minute rollup (regression)", async () => {
+  it("gives the same 3-hour buckets and counts from the 3-hour, hourly and 15-minute rollups (regression)", async () => {
     const q = { wellId: org.wellId, codes: [1, 2, 3, 4, 5], fromMs: fixture.start, toMs: END };
+    const threeHourly = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "three_hourly");
     const hourly = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "hourly");
     const quarter = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "rollup");
     expect(hourly.buckets.get(1)!.length).toBe(90 * 8);
+    expect(threeHourly).toEqual(hourly);
     expect(hourly).toEqual(quarter);
     // And the extremes agree with the samples themselves (the order may differ inside a quarter hour).
     const exact = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "samples");
@@ -217,13 +225,17 @@ describe("the in-memory chart cache", () => {
 
   it("answers a repeated request without reading the samples again, with the same series", async () => {
     clearTrendSampleCache();
+    // Kept from the second request on (the first only marks the range as asked for).
+    await getTrendData(org.actors.engineer, org.wellId, range());
     const first = await getTrendData(org.actors.engineer, org.wellId, range());
-    const spy = vi.spyOn(getSamplePool(), "query");
+    const spy = vi.spyOn(getChartPool(), "query");
     try {
       const again = await getTrendData(org.actors.engineer, org.wellId, range());
+      // The version check and the overlays (issues, field events, valve design), no samples.
       const texts = spy.mock.calls.map((c) => sqlOf(c[0]));
-      expect(texts).toHaveLength(1);
-      expect(texts[0]).toContain("sample_series_versions");
+      expect(texts).toHaveLength(2);
+      expect(texts.some((t) => t.includes("sample_series_versions"))).toBe(true);
+      expect(texts.filter((t) => /FROM samples/.test(t))).toEqual([]);
       expect(again.series).toEqual(first.series);
     } finally {
       spy.mockRestore();
