@@ -80,50 +80,6 @@ export interface HourSummaries extends SummaryColumns {
   tmax: Float64Array;
 }
 
-
-/**
- * The hourly rows from a batch's 15-minute rows (in key order): counts and sums add,
- * min/max combine, first/last come from the earliest/latest quarter, and the time of
- * the minimum (maximum) is the earliest quarter holding it, as the SQL refresh in
- * refresh-hourly-rollup.ts defines them.
- */
-export function summarizeHours(q: BucketSummaries): HourSummaries {
-  let m = 0;
-  const isNewHour = (k: number) =>
-    k === 0 || q.wellId[k] !== q.wellId[k - 1] || q.signal[k] !== q.signal[k - 1] || hourOf(q.bucket[k]) !== hourOf(q.bucket[k - 1]);
-  for (let k = 0; k < q.length; k++) if (isNewHour(k)) m++;
-  const out: HourSummaries = {
-    length: m, wellId: new Int32Array(m), signal: new Uint8Array(m), bucket: new Float64Array(m), n: new Int32Array(m),
-    vmin: new Float64Array(m), vmax: new Float64Array(m), vsum: new Float64Array(m), vfirst: new Float64Array(m), vlast: new Float64Array(m),
-    tmin: new Float64Array(m), tmax: new Float64Array(m),
-  };
-  let h = -1;
-  for (let k = 0; k < q.length; k++) {
-    if (isNewHour(k)) {
-      h++;
-      out.wellId[h] = q.wellId[k];
-      out.signal[h] = q.signal[k];
-      out.bucket[h] = hourOf(q.bucket[k]);
-      out.n[h] = q.n[k];
-      out.vmin[h] = q.vmin[k];
-      out.vmax[h] = q.vmax[k];
-      out.vsum[h] = q.vsum[k];
-      out.vfirst[h] = q.vfirst[k];
-      out.vlast[h] = q.vlast[k];
-      out.tmin[h] = q.bucket[k];
-      out.tmax[h] = q.bucket[k];
-      continue;
-    }
-    out.n[h] += q.n[k];
-    out.vsum[h] += q.vsum[k];
-    // Strictly lower / higher: on a tie the earlier quarter keeps it.
-    if (q.vmin[k] < out.vmin[h]) { out.vmin[h] = q.vmin[k]; out.tmin[h] = q.bucket[k]; }
-    if (q.vmax[k] > out.vmax[h]) { out.vmax[h] = q.vmax[k]; out.tmax[h] = q.bucket[k]; }
-    out.vlast[h] = q.vlast[k];
-  }
-  return out;
-}
-
 /** One samples_3h row per (well, signal, 3-hour bucket) (migration 20261202000007). */
 export interface ThreeHourSummaries extends HourSummaries {
   /** Start of the earliest and of the latest hour in the row. */
@@ -136,46 +92,64 @@ const THREE_HOURS_MS = 3 * 3_600_000;
 const threeHourOf = (t: number) => Math.floor(t / THREE_HOURS_MS) * THREE_HOURS_MS;
 
 /**
- * The 3-hour rows from a batch's hourly rows (in key order), as the SQL refresh in
- * refresh-three-hour-rollup.ts defines them: counts and sums add, min/max combine
- * (the earliest time on a tie), first/last come from the earliest/latest hour.
+ * Coarser rows from finer ones in key order (rows of one bin are back to back):
+ * counts and sums add, min/max combine, first/last come from the earliest/latest
+ * row, the time of the minimum (maximum) is the earliest row's `tmin` (`tmax`)
+ * holding it, and hfirst/hlast are the bucket starts of the first and last row.
  */
-export function summarizeThreeHours(h: HourSummaries): ThreeHourSummaries {
-  let m = 0;
+function coarsen(src: SummaryColumns, binOf: (t: number) => number, tmin: Float64Array, tmax: Float64Array): ThreeHourSummaries {
   const isNew = (k: number) =>
-    k === 0 || h.wellId[k] !== h.wellId[k - 1] || h.signal[k] !== h.signal[k - 1] || threeHourOf(h.bucket[k]) !== threeHourOf(h.bucket[k - 1]);
-  for (let k = 0; k < h.length; k++) if (isNew(k)) m++;
+    k === 0 || src.wellId[k] !== src.wellId[k - 1] || src.signal[k] !== src.signal[k - 1] || binOf(src.bucket[k]) !== binOf(src.bucket[k - 1]);
+  let m = 0;
+  for (let k = 0; k < src.length; k++) if (isNew(k)) m++;
   const out: ThreeHourSummaries = {
     length: m, wellId: new Int32Array(m), signal: new Uint8Array(m), bucket: new Float64Array(m), n: new Int32Array(m),
     vmin: new Float64Array(m), vmax: new Float64Array(m), vsum: new Float64Array(m), vfirst: new Float64Array(m), vlast: new Float64Array(m),
     tmin: new Float64Array(m), tmax: new Float64Array(m), hfirst: new Float64Array(m), hlast: new Float64Array(m),
   };
   let j = -1;
-  for (let k = 0; k < h.length; k++) {
+  for (let k = 0; k < src.length; k++) {
     if (isNew(k)) {
       j++;
-      out.wellId[j] = h.wellId[k];
-      out.signal[j] = h.signal[k];
-      out.bucket[j] = threeHourOf(h.bucket[k]);
-      out.n[j] = h.n[k];
-      out.vmin[j] = h.vmin[k];
-      out.vmax[j] = h.vmax[k];
-      out.vsum[j] = h.vsum[k];
-      out.vfirst[j] = h.vfirst[k];
-      out.vlast[j] = h.vlast[k];
-      out.tmin[j] = h.tmin[k];
-      out.tmax[j] = h.tmax[k];
-      out.hfirst[j] = h.bucket[k];
-      out.hlast[j] = h.bucket[k];
+      out.wellId[j] = src.wellId[k];
+      out.signal[j] = src.signal[k];
+      out.bucket[j] = binOf(src.bucket[k]);
+      out.n[j] = src.n[k];
+      out.vmin[j] = src.vmin[k];
+      out.vmax[j] = src.vmax[k];
+      out.vsum[j] = src.vsum[k];
+      out.vfirst[j] = src.vfirst[k];
+      out.vlast[j] = src.vlast[k];
+      out.tmin[j] = tmin[k];
+      out.tmax[j] = tmax[k];
+      out.hfirst[j] = src.bucket[k];
+      out.hlast[j] = src.bucket[k];
       continue;
     }
-    out.n[j] += h.n[k];
-    out.vsum[j] += h.vsum[k];
-    // Hours come in time order, so a later hour's extreme replaces only a strictly better one.
-    if (h.vmin[k] < out.vmin[j]) { out.vmin[j] = h.vmin[k]; out.tmin[j] = h.tmin[k]; }
-    if (h.vmax[k] > out.vmax[j]) { out.vmax[j] = h.vmax[k]; out.tmax[j] = h.tmax[k]; }
-    out.vlast[j] = h.vlast[k];
-    out.hlast[j] = h.bucket[k];
+    out.n[j] += src.n[k];
+    out.vsum[j] += src.vsum[k];
+    // Rows come in time order: strictly lower / higher, so on a tie the earlier row keeps it.
+    if (src.vmin[k] < out.vmin[j]) { out.vmin[j] = src.vmin[k]; out.tmin[j] = tmin[k]; }
+    if (src.vmax[k] > out.vmax[j]) { out.vmax[j] = src.vmax[k]; out.tmax[j] = tmax[k]; }
+    out.vlast[j] = src.vlast[k];
+    out.hlast[j] = src.bucket[k];
   }
   return out;
+}
+
+/**
+ * The hourly rows from a batch's 15-minute rows (in key order), as the SQL refresh
+ * in refresh-hourly-rollup.ts defines them: the time of the minimum (maximum) is the
+ * start of the earliest quarter holding it.
+ */
+export function summarizeHours(q: BucketSummaries): HourSummaries {
+  return coarsen(q, hourOf, q.bucket, q.bucket);
+}
+
+/**
+ * The 3-hour rows from a batch's hourly rows (in key order), as the SQL refresh in
+ * refresh-three-hour-rollup.ts defines them, with the first and last hour of each.
+ */
+export function summarizeThreeHours(h: HourSummaries): ThreeHourSummaries {
+  return coarsen(h, threeHourOf, h.tmin, h.tmax);
 }
