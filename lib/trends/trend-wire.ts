@@ -1,10 +1,10 @@
 // The trend answer as it travels: each series' times as a start and the steps
-// between points instead of full epoch-ms times. A 90-day chart's 7,200 times were
-// about half of a ~236 kB answer, and every byte is paid twice on the server (JSON
-// text, then UTF-8) and again in the browser; steps are small whole numbers (5,400,000
-// ms for 3-hour buckets), so the answer shrinks to about a third. Decoding gives back
-// exactly the times the service computed (sums of whole or half milliseconds are
-// exact in a double). Values are unchanged.
+// between points instead of full epoch-ms times. Every byte is paid twice on the
+// server (JSON text, then UTF-8) and again in the browser; steps are small whole
+// numbers (5,400,000 ms for 3-hour buckets) where times had 13 digits. With the
+// float4 min/max values (query-trend-series.ts) a 90-day answer went from 236 to
+// 127 kB. Decoding gives back exactly the times the service computed (sums of whole
+// or half milliseconds are exact in a double). Values are unchanged.
 import type { TrendData, TrendSeries } from "./trend-types";
 
 export interface WireTrendSeries {

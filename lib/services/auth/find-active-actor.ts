@@ -6,8 +6,8 @@ import type { Role } from "@/lib/auth/roles";
 /**
  * The database's word on a signed-in user: still active, and with which role and
  * organization now (so a role change or a switched-off account takes effect at once).
- * A plain SELECT rather than a model read: every request asks, and building the
- * model instance cost more than the query (measured under the dashboard bench).
+ * A plain SELECT rather than a model read: every request asks, and three columns
+ * need no model instance.
  */
 export async function findActiveActor(userId: number): Promise<Actor | null> {
   if (!Number.isSafeInteger(userId)) return null;

