@@ -1,4 +1,4 @@
-// npm run bench:dashboard [-- --duration 10] [-- --connections 20] [-- --only cold]
+// npm run bench:dashboard [-- --duration 10] [-- --warmup 3] [-- --connections 20] [-- --only cold]
 //
 // How fast the engineer's two heavy screens answer under load, next to a trivial
 // route as the yardstick:
@@ -36,6 +36,8 @@ const arg = (name: string, fallback: number) => {
   return i >= 0 ? Number(args[i + 1]) : fallback;
 };
 const DURATION_S = arg("duration", 10);
+/** Seconds of the same load, not measured, before each route's run (JIT and pools warm up). */
+const WARMUP_S = arg("warmup", 3);
 const CONNECTIONS = arg("connections", 20);
 /** --only <substring>: load only the routes whose name contains it (e.g. "cold"), health always. */
 const ONLY = (() => {
@@ -201,18 +203,20 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!;
 }
 
+/** Request sequence number across all runs, so a varying URL is never repeated, warm-up included. */
+let seq = 0;
+
 /** `path` is fixed, or a function of the request's sequence number (a new URL per request). */
-async function load(name: string, path: string | ((k: number) => string), cookie: string): Promise<{ name: string; p50: number; p95: number; rps: number; errors: number; n: number }> {
+async function load(name: string, path: string | ((k: number) => string), cookie: string, durationS = DURATION_S): Promise<{ name: string; p50: number; p95: number; rps: number; errors: number; n: number }> {
   const times: number[] = [];
   let errors = 0;
-  let k = 0;
   const vary = typeof path === "function" ? path : null;
   const instance = autocannon({
-    url: `${APP_URL}${vary ? vary(0) : path}`,
+    url: `${APP_URL}${vary ? vary(++seq) : path}`,
     connections: CONNECTIONS,
-    duration: DURATION_S,
+    duration: durationS,
     headers: { cookie },
-    requests: vary ? [{ setupRequest: (req) => ({ ...req, path: vary(++k) }) }] : undefined,
+    requests: vary ? [{ setupRequest: (req) => ({ ...req, path: vary(++seq) }) }] : undefined,
   });
   instance.on("response", (_client, status, _bytes, ms) => {
     if (status >= 400) errors++;
@@ -255,9 +259,13 @@ async function main() {
     ["chart, cold", coldChartPath],
     ["chart, warm", chartPath],
   ];
-  for (const [name, path] of runs) if (name === "health" || name.includes(ONLY)) results.push(await load(name, path, cookie));
+  for (const [name, path] of runs) {
+    if (name !== "health" && !name.includes(ONLY)) continue;
+    if (WARMUP_S > 0) await load(name, path, cookie, WARMUP_S);
+    results.push(await load(name, path, cookie));
+  }
   const base = results[0]!.p95;
-  console.log(`\n  ${DURATION_S} s each, ${CONNECTIONS} connections\n`);
+  console.log(`\n  ${DURATION_S} s each after ${WARMUP_S} s of the same load, ${CONNECTIONS} connections\n`);
   console.log("  route               p50 ms   p95 ms   req/s   errors   p95 / health p95");
   for (const r of results) {
     console.log(`  ${r.name.padEnd(18)} ${r.p50.toFixed(0).padStart(7)} ${r.p95.toFixed(0).padStart(8)} ${r.rps.toFixed(0).padStart(7)} ${String(r.errors).padStart(8)}   ${(r.p95 / base).toFixed(2)}×${r.name !== "health" ? (r.p95 <= 3 * base ? "  (within 3×)" : "  (over 3×)") : ""}`);
