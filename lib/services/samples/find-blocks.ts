@@ -4,6 +4,8 @@
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 
 export const HOUR_MS = 3_600_000;
+/** The 3-hour rollup's bucket (samples_3h); bins from 2000-01-01 UTC, a whole number of 3 hours from the Unix epoch. */
+export const THREE_HOURS_MS = 3 * HOUR_MS;
 
 export interface Blocks {
   length: number;

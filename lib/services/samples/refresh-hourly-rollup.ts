@@ -60,15 +60,3 @@ export async function refreshHourlyRollup(
   await client.query(REFRESH_SQL, [hours.wellIds, hours.signals, hours.los, hours.his]);
   await refreshThreeHourRollup(client, hours);
 }
-
-// A new version for each series (one sequence, so a number never repeats).
-const BUMP_SQL = `
-INSERT INTO sample_series_versions (well_id, signal, version)
-SELECT well_id, signal, nextval('sample_series_version_seq')
-FROM (SELECT DISTINCT w AS well_id, s AS signal FROM unnest($1::int[], $2::smallint[]) AS u(w, s) ORDER BY 1, 2) x
-ON CONFLICT (well_id, signal) DO UPDATE SET version = EXCLUDED.version`;
-
-/** Renew the version of each (wellIds[i], signals[i]) series: its chart answers are out of date. */
-export async function bumpSeriesVersions(client: pg.ClientBase, wellIds: number[], signals: number[]): Promise<void> {
-  if (wellIds.length > 0) await client.query(BUMP_SQL, [wellIds, signals]);
-}

@@ -20,10 +20,10 @@
 // New hours (nothing of them stored yet) take the cheaper way, addThreeHourParts:
 // their partial rows, computed in the writer, are combined with the stored rows.
 import type pg from "pg";
+import { THREE_HOURS_MS } from "./find-blocks";
 import { mergeSeriesRanges, type SeriesRanges } from "./merge-series-ranges";
 import type { ThreeHourSummaries } from "./summarize-buckets";
 
-export const THREE_HOURS_MS = 3 * 3_600_000;
 
 // LATERAL makes it one primary-key range scan of samples_1h per range. First/last and
 // arg-min/arg-max use min/max of two-element arrays (compared element by element)

@@ -3,7 +3,7 @@
 // Used for hours with no stored values yet (see write-sample-batch.ts), whose
 // rollup rows can then be inserted as they are.
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
-import { hourOf } from "./find-blocks";
+import { hourOf, THREE_HOURS_MS } from "./find-blocks";
 
 const BUCKET_MS = 15 * 60_000;
 
@@ -87,8 +87,6 @@ export interface ThreeHourSummaries extends HourSummaries {
   hlast: Float64Array;
 }
 
-const THREE_HOURS_MS = 3 * 3_600_000;
-/** 3-hour buckets bin from 2000-01-01 UTC, a whole number of 3 hours from the Unix epoch. */
 const threeHourOf = (t: number) => Math.floor(t / THREE_HOURS_MS) * THREE_HOURS_MS;
 
 /**
