@@ -1,21 +1,14 @@
 // Regression values of our own point layout (not validation against an outside source).
 import { describe, expect, it } from "vitest";
-import { breakGaps, guessMinFirst, isMinFirst, medianStep, toMinMaxPoints } from "./minmax-points";
+import { breakGaps, gapPositions, guessMinFirst, isMinFirst, medianStep, minMaxPointTimes, timesWithGaps } from "./minmax-points";
 
-describe("toMinMaxPoints", () => {
-  it("gives each bucket its extremes in the order they happened", () => {
-    const r = toMinMaxPoints(
-      [
-        { bucket: 0, vmin: 1, vmax: 9, isMinFirst: true },
-        { bucket: 100, vmin: 2, vmax: 8, isMinFirst: false },
-      ],
-      100,
-    );
-    expect(r).toEqual({ t: [25, 75, 125, 175], v: [1, 9, 8, 2] });
+describe("minMaxPointTimes", () => {
+  it("places each bucket's two points at a quarter and three quarters of it", () => {
+    expect(minMaxPointTimes([0, 100], 100)).toEqual([25, 75, 125, 175]);
   });
   it("keeps times strictly increasing", () => {
-    const r = toMinMaxPoints(Array.from({ length: 10 }, (_, i) => ({ bucket: i * 60, vmin: 0, vmax: 1, isMinFirst: i % 2 === 0 })), 60);
-    for (let i = 1; i < r.t.length; i++) expect(r.t[i]).toBeGreaterThan(r.t[i - 1]);
+    const t = minMaxPointTimes(Array.from({ length: 10 }, (_, i) => i * 60), 60);
+    for (let i = 1; i < t.length; i++) expect(t[i]).toBeGreaterThan(t[i - 1]);
   });
 });
 
@@ -43,6 +36,12 @@ describe("breakGaps", () => {
   });
   it("honours a minimum gap", () => {
     expect(breakGaps({ t: [0, 1, 2, 10], v: [1, 1, 1, 1] }, { minGapMs: 60 }).v).not.toContain(null);
+  });
+  it("finds the same gaps by position, for series held as text", () => {
+    const t = [0, 1, 2, 3, 20, 21];
+    expect(gapPositions(t)).toEqual([4]);
+    expect(timesWithGaps(t, [4])).toEqual(breakGaps({ t, v: t }).t);
+    expect(gapPositions([0, 1, 2, 10], { minGapMs: 60 })).toEqual([]);
   });
   it("median step", () => {
     expect(medianStep([0, 1, 2, 10])).toBe(1);

@@ -3,30 +3,23 @@
 // quarters of the bucket so every point has its own time and all signals of one
 // answer share the same time grid (the chart joins them without re-sorting).
 
-export interface MinMaxBucket {
-  /** Bucket start, epoch ms. */
-  bucket: number;
-  vmin: number;
-  vmax: number;
-  /** True when the minimum came before the maximum inside the bucket. */
-  isMinFirst: boolean;
-}
-
 export interface PointSeries {
   t: number[];
   v: (number | null)[];
 }
 
-/** Bucket extremes to points, in time order (buckets must be sorted by start). */
-export function toMinMaxPoints(buckets: readonly MinMaxBucket[], bucketMs: number): PointSeries {
-  const t: number[] = [];
-  const v: (number | null)[] = [];
-  for (const b of buckets) {
-    const [first, second] = b.isMinFirst ? [b.vmin, b.vmax] : [b.vmax, b.vmin];
-    t.push(b.bucket + bucketMs / 4, b.bucket + (3 * bucketMs) / 4);
-    v.push(first, second);
+/**
+ * The times of the two points of each bucket (starts in ms, sorted): a quarter and
+ * three quarters into it. The values come from the database already in the order
+ * the extremes happened (see isMinFirst below and query-trend-series.ts).
+ */
+export function minMaxPointTimes(starts: readonly number[], bucketMs: number): number[] {
+  const t = new Array<number>(starts.length * 2);
+  for (let i = 0; i < starts.length; i++) {
+    t[2 * i] = starts[i] + bucketMs / 4;
+    t[2 * i + 1] = starts[i] + (3 * bucketMs) / 4;
   }
-  return { t, v };
+  return t;
 }
 
 /**
@@ -53,24 +46,54 @@ export function medianStep(t: readonly number[]): number | null {
   return steps[Math.floor(steps.length / 2)];
 }
 
+export interface GapOptions {
+  /** How many typical steps make a gap (default 5). */
+  factor?: number;
+  /** The shortest gap, ms, whatever the typical step (default 0). */
+  minGapMs?: number;
+}
+
 /**
- * Put a null between two points further apart than `factor` typical steps (and at
- * least `minGapMs`), so the chart breaks the line over missing data instead of
- * drawing a straight line across an outage.
+ * The positions i (ascending) where point i is further from point i − 1 than
+ * `factor` typical steps and at least `minGapMs`: where the chart should break the
+ * line over missing data instead of drawing a straight line across an outage.
  */
-export function breakGaps(series: PointSeries, options: { factor?: number; minGapMs?: number } = {}): PointSeries {
-  const step = medianStep(series.t);
-  if (step === null) return series;
+export function gapPositions(t: readonly number[], options: GapOptions = {}): number[] {
+  const step = medianStep(t);
+  if (step === null) return [];
   const limit = Math.max(step * (options.factor ?? 5), options.minGapMs ?? 0);
-  const t: number[] = [];
-  const v: (number | null)[] = [];
-  for (let i = 0; i < series.t.length; i++) {
-    if (i > 0 && series.t[i] - series.t[i - 1] > limit) {
-      t.push((series.t[i] + series.t[i - 1]) / 2);
-      v.push(null);
+  const out: number[] = [];
+  for (let i = 1; i < t.length; i++) if (t[i] - t[i - 1] > limit) out.push(i);
+  return out;
+}
+
+/** The times with a point added midway into each gap (positions from gapPositions). */
+export function timesWithGaps(t: readonly number[], gaps: readonly number[]): number[] {
+  if (gaps.length === 0) return t as number[];
+  const out: number[] = [];
+  let next = 0;
+  for (let i = 0; i < t.length; i++) {
+    if (next < gaps.length && gaps[next] === i) {
+      out.push((t[i] + t[i - 1]) / 2);
+      next++;
     }
-    t.push(series.t[i]);
+    out.push(t[i]);
+  }
+  return out;
+}
+
+/** The series with a null point midway into each gap (see gapPositions). */
+export function breakGaps(series: PointSeries, options: GapOptions = {}): PointSeries {
+  const gaps = gapPositions(series.t, options);
+  if (gaps.length === 0) return series;
+  const v: (number | null)[] = [];
+  let next = 0;
+  for (let i = 0; i < series.v.length; i++) {
+    if (next < gaps.length && gaps[next] === i) {
+      v.push(null);
+      next++;
+    }
     v.push(series.v[i]);
   }
-  return { t, v };
+  return { t: timesWithGaps(series.t, gaps), v };
 }

@@ -5,6 +5,7 @@ import { describe, expect, it } from "vitest";
 import { serializeTrendData } from "./serialize-trend-data";
 import type { TrendData, TrendSeries } from "./trend-types";
 import { decodeTrendData, toWireSeries } from "./trend-wire";
+import { textSeries } from "./text-series";
 
 const decode = (b: Uint8Array) => new TextDecoder().decode(b);
 const wire = (d: TrendData) => JSON.stringify({ ...d, series: d.series.map(toWireSeries) });
@@ -58,5 +59,17 @@ describe("serializeTrendData", () => {
     serializeTrendData(d);
     list[0].v[1] = 5;
     expect(decode(serializeTrendData(d))).toBe(wire(d));
+  });
+
+  it("writes a series held as number text from that text, and it reads back as the same numbers", () => {
+    const t = [1_780_002_700_000, 1_780_008_100_000, 1_780_010_000_000];
+    const held = textSeries({ signal: "casing_pressure", unit: "psig", t }, "1053.76,null,1e+07");
+    const plain: TrendSeries = { signal: "casing_pressure", unit: "psig", t, v: [1053.76, null, 1e7] };
+    const text = decode(serializeTrendData(makeData([held])));
+    expect(text).toContain('"v":[1053.76,null,1e+07]');
+    expect(JSON.parse(text)).toEqual(JSON.parse(wire(makeData([plain]))));
+    // Any other reader sees ordinary numbers.
+    expect(held.v).toEqual(plain.v);
+    expect(held).toEqual(plain);
   });
 });

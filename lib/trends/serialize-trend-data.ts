@@ -1,10 +1,14 @@
 // The trend answer as JSON bytes, in the wire form of trend-wire.ts (series times as
-// a start and steps): byte for byte JSON.stringify of that form, with the series
-// part serialized once per series list: the service hands out the same frozen list
-// while its cached answer is current (lib/services/trends/trend-sample-cache.ts), so
-// a repeated chart only serializes its small overlays.
+// a start and steps): JSON.stringify of that form, except that a series holding its
+// values as the database's number text (text-series.ts) is written from that text,
+// which may spell a number differently (1e+07 for 10000000) but reads back the same.
+// The series part is serialized once per series list: the service hands out the
+// same frozen list while its cached answer is current
+// (lib/services/trends/trend-sample-cache.ts), so a repeated chart only serializes
+// its small overlays.
 import type { TrendData, TrendSeries } from "./trend-types";
-import { toWireSeries } from "./trend-wire";
+import { valueTextOf } from "./text-series";
+import { toWireSeries, toWireTimes } from "./trend-wire";
 
 const encoder = new TextEncoder();
 const seriesBytes = new WeakMap<readonly TrendSeries[], Uint8Array>();
@@ -12,11 +16,19 @@ const seriesBytes = new WeakMap<readonly TrendSeries[], Uint8Array>();
 function encodeSeries(series: readonly TrendSeries[]): Uint8Array {
   let bytes = seriesBytes.get(series);
   if (!bytes) {
-    bytes = encoder.encode(JSON.stringify(series.map(toWireSeries)));
+    bytes = encoder.encode(`[${series.map(seriesJson).join(",")}]`);
     // Only frozen lists can be remembered: a list that may still change is encoded each time.
     if (Object.isFrozen(series)) seriesBytes.set(series, bytes);
   }
   return bytes;
+}
+
+/** One series in its wire form, with the same key order as WireTrendSeries. */
+function seriesJson(s: TrendSeries): string {
+  const text = valueTextOf(s);
+  if (text === undefined) return JSON.stringify(toWireSeries(s));
+  const { t0, dt } = toWireTimes(s.t);
+  return `{"signal":${JSON.stringify(s.signal)},"unit":${JSON.stringify(s.unit)},"t0":${JSON.stringify(t0)},"dt":${JSON.stringify(dt)},"v":[${text}]}`;
 }
 
 /** JSON.stringify of the wire form of `data` as UTF-8, reusing the encoded series of a frozen series list. */

@@ -19,10 +19,15 @@ export interface WireTrendSeries {
 
 export type WireTrendData = Omit<TrendData, "series"> & { series: WireTrendSeries[] };
 
+/** A series' times as they travel: the first time and the steps. */
+export function toWireTimes(t: readonly number[]): Pick<WireTrendSeries, "t0" | "dt"> {
+  const dt = new Array<number>(t.length);
+  for (let i = 0; i < t.length; i++) dt[i] = i === 0 ? 0 : t[i] - t[i - 1];
+  return { t0: t.length > 0 ? t[0] : 0, dt };
+}
+
 export function toWireSeries(s: TrendSeries): WireTrendSeries {
-  const dt = new Array<number>(s.t.length);
-  for (let i = 0; i < s.t.length; i++) dt[i] = i === 0 ? 0 : s.t[i] - s.t[i - 1];
-  return { signal: s.signal, unit: s.unit, t0: s.t.length > 0 ? s.t[0] : 0, dt, v: s.v };
+  return { signal: s.signal, unit: s.unit, ...toWireTimes(s.t), v: s.v };
 }
 
 export function fromWireSeries(w: WireTrendSeries): TrendSeries {

@@ -10,11 +10,13 @@ import { SIGNAL_CODE, SIGNAL_QUANTITY, type Signal } from "@/lib/signals";
 import { inferOperatingPoint, valveSurfacePressures } from "@/lib/gaslift/operating-point";
 import type { WellDesign } from "@/lib/gaslift/types";
 import { DEFAULT_WIDTH_PX, chooseBucketMs, chooseBucketSource, planBuckets, pointCap, type BucketPlan } from "@/lib/trends/bucket-plan";
-import { breakGaps, toMinMaxPoints, type MinMaxBucket } from "@/lib/trends/minmax-points";
+import { breakGaps, gapPositions, minMaxPointTimes, timesWithGaps } from "@/lib/trends/minmax-points";
+import { insertNulls } from "@/lib/trends/number-list-text";
+import { textSeries, valueTextOf } from "@/lib/trends/text-series";
 import { formatOperatingValve, formatValveLabel } from "@/lib/trends/valve-label";
 import type { TrendData, TrendOperatingPoint, TrendSeries, TrendValveLine } from "@/lib/trends/trend-types";
 import { getChartPool } from "@/lib/services/samples/sample-db";
-import { countRawValues, readMinMaxBuckets, readRawValues, type SeriesQuery } from "./query-trend-series";
+import { countRawValues, readMinMaxBuckets, readRawValues, type MinMaxColumns, type SeriesQuery } from "./query-trend-series";
 import { RECENT_MEDIAN_CODES, readRecentMedians, type RecentMedians } from "./read-recent-medians";
 import { readSeriesVersions, readThroughCache } from "./trend-sample-cache";
 import { readTrendContext } from "./read-trend-context";
@@ -82,13 +84,14 @@ interface SamplePart {
  * series read. Cached answers are shared between requests, so they are frozen.
  */
 async function readSamplePart(db: pg.Pool, q: SeriesQuery, signals: Signal[], widthPx: number): Promise<SamplePart> {
-  const version = await readSeriesVersions(db, q.wellId, [...new Set([...q.codes, ...RECENT_MEDIAN_CODES])]);
   const key = `${q.wellId}|${q.codes.join(",")}|${q.fromMs}|${q.toMs}|${widthPx}`;
-  return readThroughCache(key, version, async () => {
+  const readVersion = () => readSeriesVersions(db, q.wellId, [...new Set([...q.codes, ...RECENT_MEDIAN_CODES])]);
+  return readThroughCache(key, readVersion, async () => {
     const [reduced, recent] = await Promise.all([readReducedSeries(db, q, signals, widthPx), readRecentMedians(db, q.wellId, q.fromMs, q.toMs)]);
     for (const s of reduced.series) {
       Object.freeze(s.t);
-      Object.freeze(s.v);
+      // A text series' values are parsed (and frozen) only if read.
+      if (valueTextOf(s) === undefined) Object.freeze(s.v);
       Object.freeze(s);
     }
     // A frozen series list also lets serializeTrendData reuse its encoded bytes.
@@ -127,11 +130,14 @@ function toRawSeries(signals: Signal[], raw: Map<number, { t: number[]; v: numbe
   });
 }
 
-function toBucketSeries(signals: Signal[], buckets: Map<number, MinMaxBucket[]>, bucketMs: number): TrendSeries[] {
+/** Bucketed series keep their values as the database's number text (lib/trends/text-series.ts). */
+function toBucketSeries(signals: Signal[], buckets: Map<number, MinMaxColumns>, bucketMs: number): TrendSeries[] {
   return signals.map((signal) => {
-    const points = toMinMaxPoints(buckets.get(SIGNAL_CODE[signal]) ?? [], bucketMs);
+    const { starts, values } = buckets.get(SIGNAL_CODE[signal]) ?? { starts: [], values: "" };
+    const t = minMaxPointTimes(starts, bucketMs);
     // A missing bucket or two is a short outage; more breaks the line.
-    return { signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], ...breakGaps(points, { factor: 3, minGapMs: MIN_GAP_MS }) };
+    const gaps = gapPositions(t, { factor: 3, minGapMs: MIN_GAP_MS });
+    return textSeries({ signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], t: timesWithGaps(t, gaps) }, insertNulls(values, gaps));
   });
 }
 

@@ -6,8 +6,8 @@
 // Times leave the database as epoch ms (float8) so no Date objects are built per row.
 import pg from "pg";
 import { ROLLUP_BUCKET_MS, SOURCE_ROW_MS, type BucketSource } from "@/lib/trends/bucket-plan";
-import type { MinMaxBucket } from "@/lib/trends/minmax-points";
-import { arrayTypeParsers } from "./pg-array-text";
+import { flattenPairArray, reorderPairs, type NumberListText } from "@/lib/trends/number-list-text";
+import { minMaxTypeParsers } from "./pg-array-text";
 
 /** The rollup's bucket origin (write-sample-batch.ts bins from 2000-01-01 UTC). */
 const ORIGIN = "timestamptz '2000-01-01Z'";
@@ -70,14 +70,16 @@ export async function readRawValues(db: pg.Pool | pg.ClientBase, q: SeriesQuery)
   return out;
 }
 
-// Min/max buckets come back as one row per signal holding arrays (bucket numbers,
-// minima, maxima, which came first) and the count of stored values read: decoding
-// one row per bucket (3,600 for 90 days × 5 signals) cost more Node CPU than
-// anything else in a chart request, and most of the bytes (measured under the
-// dashboard bench). Minima and maxima travel as float4, about 7 significant digits:
-// far finer than a chart can draw, and a value stored with 7 digits or fewer (as
-// historians record them) comes back exactly, because float4 output is the shortest
-// text that reads back to the same float4. Raw values (zoomed in) stay exact.
+// Min/max buckets come back as one row per signal holding two arrays (bucket
+// numbers, and each bucket's extremes in the order they happened) and the count of
+// stored values read: decoding one row per bucket (3,600 for 90 days × 5 signals)
+// cost more Node CPU than anything else in a chart request, and most of the bytes
+// (measured under the dashboard bench). The extremes travel as float4, about 7
+// significant digits: far finer than a chart can draw, and a value stored with 7
+// digits or fewer (as historians record them) comes back exactly, because float4
+// output is the shortest text that reads back to the same float4. That text goes on
+// to the browser as it is (lib/trends/number-list-text.ts). Raw values (zoomed in)
+// stay exact.
 
 /** The bucket origin in epoch ms (2000-01-01 UTC). */
 const ORIGIN_MS = Date.UTC(2000, 0, 1);
@@ -89,20 +91,21 @@ const minFirst = (tmin: string, tmax: string, vfirst: string) =>
 
 /**
  * One row per signal: the arrays, in bucket order, from rows with columns b, n, vmin,
- * vmax, tmin, tmax, vfirst. The rows come from a subquery sorted by bucket rather
- * than an ORDER BY inside each aggregate, which sorted the same rows four times (5.3
- * against 2.2 ms of database time for 90 days × 5 signals, measured). PostgreSQL
- * feeds a plain aggregate its subquery's rows in order ("will usually work", says its
- * manual, §4.2.7), so readMinMaxBuckets checks the order and sorts if it ever is not.
+ * vmax, tmin, tmax, vfirst; v holds each bucket's pair {first, second} (a
+ * two-dimensional float4 array). The rows come from a subquery sorted by bucket
+ * rather than an ORDER BY inside each aggregate, which sorted the same rows once per
+ * aggregate (5.3 against 2.2 ms of database time for 90 days × 5 signals, measured).
+ * PostgreSQL feeds a plain aggregate its subquery's rows in order ("will usually
+ * work", says its manual, §4.2.7), so readMinMaxBuckets checks the order and sorts if
+ * it ever is not; both arrays come from the same rows, so they stay paired.
  */
 const arraysPerSignal = (rows: string) => `
-SELECT s.code AS signal, x.n, x.k, x.vmin, x.vmax, x.f
+SELECT s.code AS signal, x.n, x.k, x.v
 FROM unnest($2::smallint[]) AS s(code)
 CROSS JOIN LATERAL (
   SELECT sum(n)::float8 AS n, array_agg(${bucketNumber("b")}) AS k,
-         array_agg(vmin::float4) AS vmin, array_agg(vmax::float4) AS vmax,
-         array_agg(${minFirst("tmin", "tmax", "vfirst")}) AS f
-  FROM (${rows} ORDER BY b) g
+         array_agg(CASE WHEN mf THEN array[vmin::float4, vmax::float4] ELSE array[vmax::float4, vmin::float4] END) AS v
+  FROM (SELECT b, n, vmin, vmax, ${minFirst("tmin", "tmax", "vfirst")} AS mf FROM (${rows}) r0 ORDER BY b) g
 ) x`;
 
 // Per chart bucket from finer rows: count, extremes, the time of each extreme
@@ -163,37 +166,49 @@ interface ArrayRow {
   signal: number;
   n: number | null;
   k: number[] | null;
-  vmin: number[] | null;
-  vmax: number[] | null;
-  f: boolean[] | null;
+  /** "{{first,second},…}" (float4 text), or null without buckets. */
+  v: string | null;
 }
 
-const ARRAY_PARSERS = arrayTypeParsers(pg.types);
+const ARRAY_PARSERS = minMaxTypeParsers(pg.types);
+
+/** One signal's buckets: their starts and, per bucket, its two extremes in the order they happened. */
+export interface MinMaxColumns {
+  /** Bucket starts, epoch ms, ascending. */
+  starts: number[];
+  /** Two values per bucket, first and second, as JSON number text (number-list-text.ts). */
+  values: NumberListText;
+}
 
 export interface MinMaxAnswer {
   /** Buckets per signal code, in time order. */
-  buckets: Map<number, MinMaxBucket[]>;
+  buckets: Map<number, MinMaxColumns>;
   /** Stored values per signal code in the buckets read (edge buckets may add a few past the range). */
   counts: Map<number, number>;
 }
 
-/** Minimum and maximum per bucket and signal, with the order they happened in, and the counts behind them. */
+/** Minimum and maximum per bucket and signal, in the order they happened, and the counts behind them. */
 export async function readMinMaxBuckets(db: pg.Pool | pg.ClientBase, q: SeriesQuery, bucketMs: number, source: BucketSource): Promise<MinMaxAnswer> {
   const sql = minMaxSql(source, bucketMs);
   const r = await db.query<ArrayRow>({ ...named(sql.name, sql.text, [...params(q), bucketMs]), types: ARRAY_PARSERS });
-  const buckets = new Map<number, MinMaxBucket[]>();
+  const buckets = new Map<number, MinMaxColumns>();
   const counts = new Map<number, number>();
   for (const row of r.rows) {
     const code = Number(row.signal);
     const k = row.k ?? [];
-    const list: MinMaxBucket[] = new Array(k.length);
+    const starts = new Array<number>(k.length);
     let isSorted = true;
     for (let i = 0; i < k.length; i++) {
-      list[i] = { bucket: ORIGIN_MS + k[i] * bucketMs, vmin: row.vmin![i], vmax: row.vmax![i], isMinFirst: row.f![i] };
+      starts[i] = ORIGIN_MS + k[i] * bucketMs;
       if (i > 0 && k[i] <= k[i - 1]) isSorted = false;
     }
-    if (!isSorted) list.sort((a, b) => a.bucket - b.bucket);
-    buckets.set(code, list);
+    let values = row.v === null ? "" : flattenPairArray(row.v);
+    if (!isSorted) {
+      const order = starts.map((_, i) => i).sort((a, b) => starts[a] - starts[b]);
+      values = reorderPairs(values, order);
+      starts.sort((a, b) => a - b);
+    }
+    buckets.set(code, { starts, values });
     if (k.length > 0) counts.set(code, row.n ?? 0);
   }
   return { buckets, counts };

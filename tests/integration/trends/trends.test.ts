@@ -13,7 +13,10 @@ import { mandrelColumns } from "@/lib/services/wells/well-dto";
 import { valveSurfacePressures } from "@/lib/gaslift/operating-point";
 import { formatValveLabel } from "@/lib/trends/valve-label";
 import { AppError } from "@/lib/errors";
-import { readMinMaxBuckets } from "@/lib/services/trends/query-trend-series";
+import { readMinMaxBuckets, type MinMaxColumns } from "@/lib/services/trends/query-trend-series";
+import { parseNumberList } from "@/lib/trends/number-list-text";
+import { serializeTrendData } from "@/lib/trends/serialize-trend-data";
+import { decodeTrendData, type WireTrendData } from "@/lib/trends/trend-wire";
 import { readTrendContext } from "@/lib/services/trends/read-trend-context";
 import { clearTrendSampleCache } from "@/lib/services/trends/trend-sample-cache";
 import { getChartPool, getSamplePool, openSampleClient } from "@/lib/services/samples/sample-db";
@@ -55,11 +58,9 @@ beforeAll(async () => {
 
 afterAll(async () => {
   // 90 days of minute values are ~0.5 M rows: leave the shared test database as it was.
-  await getSamplePool().query("DELETE FROM sample_blocks WHERE well_id = $1", [org.wellId]);
-  await getSamplePool().query("DELETE FROM samples_15m WHERE well_id = $1", [org.wellId]);
-  await getSamplePool().query("DELETE FROM samples_1h WHERE well_id = $1", [org.wellId]);
-  await getSamplePool().query("DELETE FROM samples_3h WHERE well_id = $1", [org.wellId]);
-  await getSamplePool().query("DELETE FROM sample_series_versions WHERE well_id = $1", [org.wellId]);
+  for (const table of ["sample_blocks", "samples_15m", "samples_1h", "samples_3h", "sample_series_versions"]) {
+    await getSamplePool().query(`DELETE FROM ${table} WHERE well_id = ANY($1::int[])`, [[org.wellId, other.wellId]]);
+  }
   await getSamplePool().end();
   await getChartPool().end();
   await closeDb();
@@ -164,8 +165,45 @@ describe("getTrendData", () => {
   });
 });
 
+/** Each bucket as [start, minimum, maximum], from the pairs in the order they happened. */
+function extremes(c: MinMaxColumns): number[][] {
+  const v = parseNumberList(c.values) as number[];
+  return c.starts.map((start, i) => [start, Math.min(v[2 * i], v[2 * i + 1]), Math.max(v[2 * i], v[2 * i + 1])]);
+}
+
 /** The SQL text of a pool.query call: a string, or a named statement's config. */
 const sqlOf = (arg: unknown) => (typeof arg === "string" ? arg : (arg as { text: string }).text);
+
+describe("an outage in bucketed data", () => {
+  it("breaks the line with a null inside the outage, in the service's answer and in the JSON sent", async () => {
+    // Invented: 10-minute casing pressure for 30 days with no values for days 12 to 15.
+    const start = END - 30 * DAY;
+    const times = Array.from({ length: 30 * 144 }, (_, i) => start + i * 10 * MINUTE).filter((t) => t < start + 12 * DAY || t >= start + 15 * DAY);
+    const client = await openSampleClient();
+    try {
+      await writeSampleBatch(client, {
+        length: times.length,
+        wellId: times.map(() => other.wellId),
+        signal: new Uint8Array(times.length).fill(1),
+        t: Float64Array.from(times),
+        v: Float64Array.from(times, (t) => 900 + ((t / (10 * MINUTE)) % 7)),
+      });
+    } finally {
+      await client.end();
+    }
+    const d = await getTrendData(other.actors.engineer, other.wellId, { from: start, to: END, width: 1200 });
+    expect(d.resolution).toBe("minmax");
+    const casing = d.series[0];
+    const gaps = casing.v.flatMap((v, i) => (v === null ? [i] : []));
+    expect(gaps).toHaveLength(1);
+    expect(casing.t[gaps[0]]).toBeGreaterThan(start + 12 * DAY);
+    expect(casing.t[gaps[0]]).toBeLessThan(start + 15 * DAY);
+    expect(casing.v.filter((v) => v !== null).every((v) => v >= 900 && v <= 906)).toBe(true);
+    const sent = decodeTrendData(JSON.parse(new TextDecoder().decode(serializeTrendData(d))) as WireTrendData);
+    expect(sent.series[0]).toEqual({ signal: casing.signal, unit: casing.unit, t: casing.t, v: [...casing.v] });
+    expect(d.series[1]).toEqual({ signal: "tubing_pressure", unit: "psig", t: [], v: [] });
+  });
+});
 
 describe("which table a trend is read from", () => {
   /** The tables named in FROM clauses of the sample queries one getTrendData call runs. */
@@ -208,14 +246,14 @@ describe("which table a trend is read from", () => {
     const threeHourly = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "three_hourly");
     const hourly = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "hourly");
     const quarter = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "rollup");
-    expect(hourly.buckets.get(1)!.length).toBe(90 * 8);
+    expect(hourly.buckets.get(1)!.starts.length).toBe(90 * 8);
     expect(threeHourly).toEqual(hourly);
     expect(hourly).toEqual(quarter);
     // And the extremes agree with the samples themselves (the order may differ inside a quarter hour).
     const exact = await readMinMaxBuckets(getSamplePool(), q, 3 * 60 * MINUTE, "samples");
     expect(hourly.counts).toEqual(exact.counts);
-    for (const [code, list] of exact.buckets) {
-      expect(hourly.buckets.get(code)!.map((b) => [b.bucket, b.vmin, b.vmax])).toEqual(list.map((b) => [b.bucket, b.vmin, b.vmax]));
+    for (const [code, columns] of exact.buckets) {
+      expect(extremes(hourly.buckets.get(code)!)).toEqual(extremes(columns));
     }
   });
 });
