@@ -43,6 +43,13 @@ export interface ApplyCounts {
 export interface ApplyOptions {
   lifecycle?: IssueLifecycle;
   transaction?: Transaction;
+  /**
+   * The run's `from`: the rules judged findings starting at or after it with their
+   * whole look-back. A finding starting earlier was judged with less (its baseline
+   * cut short by the start of the data), so at the same last sighting it does not
+   * replace a stored view (see extendIssue). Unset: every finding counts as whole.
+   */
+  judgedFrom?: number;
 }
 
 type Patch = Partial<{
@@ -79,18 +86,19 @@ export async function applyFindings(
   ranUntil: number,
   options: ApplyOptions = {},
 ): Promise<ApplyCounts> {
-  const run = (transaction: Transaction) => applyInTransaction(organizationId, wellId, findings, ranUntil, options.lifecycle ?? DEFAULT_LIFECYCLE, transaction);
-  return options.transaction ? run(options.transaction) : sequelize.transaction(run);
+  const run: RunScope = { ranUntil, life: options.lifecycle ?? DEFAULT_LIFECYCLE, judgedFrom: options.judgedFrom ?? -Infinity };
+  const apply = (transaction: Transaction) => applyInTransaction(organizationId, wellId, findings, run, transaction);
+  return options.transaction ? apply(options.transaction) : sequelize.transaction(apply);
 }
 
-async function applyInTransaction(
-  organizationId: number,
-  wellId: number,
-  findings: Finding[],
-  ranUntil: number,
-  life: IssueLifecycle,
-  transaction: Transaction,
-): Promise<ApplyCounts> {
+/** What the run saw: the end of its data, the lifecycle settings, and judgedFrom (ApplyOptions). */
+interface RunScope {
+  ranUntil: number;
+  life: IssueLifecycle;
+  judgedFrom: number;
+}
+
+async function applyInTransaction(organizationId: number, wellId: number, findings: Finding[], run: RunScope, transaction: Transaction): Promise<ApplyCounts> {
   await sequelize.query("SELECT pg_advisory_xact_lock(:ns, :well)", { replacements: { ns: WELL_LOCK_NAMESPACE, well: wellId }, transaction });
   const issues = await Issue.findAll({
     where: { organization_id: organizationId, well_id: wellId },
@@ -103,7 +111,7 @@ async function applyInTransaction(
   const rules = new Set<string>([...byRule.keys(), ...issues.map((i) => i.rule)]);
   for (const rule of rules) {
     const list = (byRule.get(rule) ?? []).slice().sort((a, b) => a.start - b.start);
-    await applyRule(organizationId, wellId, rule as RuleKey, list, issues.filter((i) => i.rule === rule), ranUntil, life, transaction, counts);
+    await applyRule(organizationId, wellId, rule as RuleKey, list, issues.filter((i) => i.rule === rule), run, transaction, counts);
   }
   return counts;
 }
@@ -114,11 +122,11 @@ async function applyRule(
   rule: RuleKey,
   findings: Finding[],
   issues: Issue[],
-  ranUntil: number,
-  life: IssueLifecycle,
+  run: RunScope,
   transaction: Transaction,
   counts: ApplyCounts,
 ): Promise<void> {
+  const { ranUntil, life, judgedFrom } = run;
   const closeMs = life.closeAfterMinutes * MINUTE_MS;
   const graceMs = life.resolveGraceMinutes * MINUTE_MS;
   let live = issues.find((i) => LIVE_STATUSES.includes(i.status));
@@ -133,7 +141,7 @@ async function applyRule(
     const lastSeen = f.end ?? ranUntil;
     const isOngoing = f.end === null || ranUntil - f.end < closeMs;
     if (live) {
-      extendIssue(live, work(live), f, lastSeen, isOngoing);
+      extendIssue(live, work(live), f, lastSeen, isOngoing, judgedFrom);
       continue;
     }
     const prev = issues.find((i) => !LIVE_STATUSES.includes(i.status));
@@ -146,7 +154,7 @@ async function applyRule(
         w.events.push({ kind: "recurred", from_status: prev.status, to_status: "recurred", data: { recurrenceCount: count, seenAt: new Date(Math.max(f.start, fixedAt + graceMs)).toISOString() } });
         setValue(prev, w.patch, "status", "recurred");
         setValue(prev, w.patch, "recurrence_count", count);
-        extendIssue(prev, w, f, lastSeen, isOngoing);
+        extendIssue(prev, w, f, lastSeen, isOngoing, judgedFrom);
         live = prev;
         continue;
       }
@@ -226,7 +234,7 @@ function openIssue(organizationId: number, wellId: number, rule: RuleKey, f: Fin
 }
 
 /** Extend a live issue with one finding (see the header for the rules). */
-function extendIssue(issue: Issue, w: { patch: Patch; events: PendingEvent[] }, f: Finding, lastSeen: number, isOngoing: boolean): void {
+function extendIssue(issue: Issue, w: { patch: Patch; events: PendingEvent[] }, f: Finding, lastSeen: number, isOngoing: boolean, judgedFrom: number): void {
   const current = (key: keyof Patch) => (key in w.patch ? w.patch[key] : issue[key as keyof Issue]);
   const started = (current("started_at") as Date).getTime();
   if (f.start < started) setValue(issue, w.patch, "started_at", new Date(f.start));
@@ -239,8 +247,9 @@ function extendIssue(issue: Issue, w: { patch: Patch; events: PendingEvent[] }, 
   const seen = (current("last_seen_at") as Date).getTime();
   // Only the newest view of the signature refreshes the words and the end state;
   // a re-run over older data leaves them alone, and so does a run over a shorter
-  // window (the hourly sweep) that sees the same end but not the whole episode.
-  if (lastSeen > seen || (lastSeen === seen && f.start <= started)) {
+  // window (the hourly sweep) that sees the same end but not the whole episode, or
+  // sees it whole but without the data before it (a baseline cut short).
+  if (lastSeen > seen || (lastSeen === seen && f.start <= started && f.start >= judgedFrom)) {
     if (lastSeen > seen) setValue(issue, w.patch, "last_seen_at", new Date(lastSeen));
     setValue(issue, w.patch, "ended_at", isOngoing ? null : new Date(lastSeen));
     for (const [k, v] of Object.entries(findingValues(f))) setValue(issue, w.patch, k as keyof Patch, v as never);

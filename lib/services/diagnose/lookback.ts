@@ -21,3 +21,18 @@ export function lookbackMs(settings: RuleSettings[]): number {
   }
   return Math.max(MIN_LOOKBACK_MS, minutes * MINUTE_MS);
 }
+
+const DAY_MS = 1440 * MINUTE_MS;
+
+/**
+ * Where a run's data starts: `lookback` before `from`, moved back to the start of
+ * that UTC day. The rules lay their bins and sliding windows from the first value
+ * they are given, so two runs starting at different times of day saw the same
+ * episode through different windows and wrote slightly different words and numbers
+ * for it (a heading issue's period, swing and production at risk flipped between the
+ * hourly sweep's view and a longer run's, found on the demo field). Starting every
+ * run at midnight UTC lays the same grid for any step that divides a day.
+ */
+export function dataStart(from: number, lookback: number): number {
+  return Math.floor((from - lookback) / DAY_MS) * DAY_MS;
+}

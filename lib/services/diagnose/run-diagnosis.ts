@@ -6,7 +6,7 @@
 //
 // Time range: `to` defaults to the newest stored value of the wells (data time, not
 // the clock), `from` to `to` minus 30 days for a manual run and 2 days otherwise.
-// Look-back: lookback.ts (at least 3 days).
+// Look-back: lookback.ts (at least 3 days, from the start of that UTC day).
 import type pg from "pg";
 import { DiagnoseRun } from "@/models";
 import type { RuleSettings } from "@/lib/diagnostics/settings";
@@ -17,7 +17,7 @@ import { DiagnoseRunJobSchema, type DiagnoseRunJob } from "./diagnose-run-job";
 import { findLatestSampleTime } from "./latest-sample-time";
 import { loadDiagnosisPads } from "./load-diagnosis-pads";
 import { loadSettingsIndex } from "./load-settings-index";
-import { lookbackMs } from "./lookback";
+import { dataStart, lookbackMs } from "./lookback";
 import { upsertFieldEvents } from "./upsert-field-events";
 
 const DAY_MS = 86_400_000;
@@ -91,7 +91,7 @@ export async function runDiagnosis(
     summary.from = from;
     summary.to = to;
     // `to` is inclusive: the newest value itself belongs to the run.
-    const series = loadAlignedSeries(orgId, pads.map((p) => p.wells.map((w) => w.id)), from - summary.lookbackMs, to + 1, { client: options.client });
+    const series = loadAlignedSeries(orgId, pads.map((p) => p.wells.map((w) => w.id)), dataStart(from, summary.lookbackMs), to + 1, { client: options.client });
     let t = performance.now();
     for (const pad of pads) {
       const next = await series.next();
@@ -110,7 +110,7 @@ export async function runDiagnosis(
         summary.fieldEventsCreated += fe.created;
       }
       for (const w of result.wells) {
-        const c = await applyFindings(orgId, w.wellId, w.findings, w.lastT, { lifecycle: lifecycles.get(w.wellId) });
+        const c = await applyFindings(orgId, w.wellId, w.findings, w.lastT, { lifecycle: lifecycles.get(w.wellId), judgedFrom: from });
         summary.issuesOpened += c.opened;
         summary.issuesUpdated += c.updated;
         summary.recurred += c.recurred;

@@ -137,3 +137,39 @@ describe("pad-wide outage", () => {
     expect(again.map((e) => [e.id, e.updated_at.getTime()])).toEqual([[events[0].id, before]]);
   });
 });
+
+describe("shorter runs over the same episode", () => {
+  // Found on the demo field: the hourly sweep (two days, at any time of the hour)
+  // and a longer run saw the same heading episode through different windows and
+  // rewrote its period, swing and production at risk back and forth. Regression
+  // check of our own code.
+  it("leave the words and numbers of a longer run's view alone", async () => {
+    const headOrg = await makeOrg("diagnose-sweep");
+    let scenario: WellScenario | null = null;
+    let onset = 0;
+    for (let seed = 21; seed < 60 && !scenario; seed++) {
+      const s = generateWellScenario({ seed, kind: "heading", start: START, days: 9 });
+      const label = s.labels.find((l) => l.kind === "heading");
+      if (label && label.start > START + 4 * DAY && label.start < START + 6 * DAY) {
+        scenario = s;
+        onset = label.start;
+      }
+    }
+    expect(scenario).not.toBeNull();
+    const id = await addScenarioWell(headOrg.organizationId, headOrg.padId, scenario!, "heading");
+    await writeSeries(id, scenario!.series);
+    const end = START + 9 * DAY - 60_000;
+    const run = (from: number, reason: "manual" | "schedule") => runDiagnosis({ v: 1, organizationId: headOrg.organizationId, wellIds: [id], from, to: end, reason });
+    await run(START, "manual");
+    const words = async () =>
+      (await Issue.findAll({ where: { well_id: id }, order: [["id", "ASC"]] })).map((i) => [i.rule, i.summary, i.evidence, i.production_at_risk, i.updated_at.getTime()]);
+    const before = await words();
+    expect(before.some(([rule]) => rule === "heading")).toBe(true);
+    // Sweeps starting before, at and after the onset, at odd minutes of the hour.
+    for (const from of [onset - 97 * 60_000, onset + 13 * 60_000, onset + 7 * HOUR + 41 * 60_000]) {
+      const s = await run(from, "schedule");
+      expect(s.issuesUpdated).toBe(0);
+    }
+    expect(await words()).toEqual(before);
+  });
+});
