@@ -16,6 +16,19 @@ describe("toWireSeries / fromWireSeries", () => {
     expect(fromWireSeries(w)).toEqual(series(t, [1, 2, null, 3, 4]));
   });
 
+  it("sends evenly spaced times as one step, and gives them back", () => {
+    const t = Array.from({ length: 1440 }, (_, i) => 1_788_396_300_000 + i * 5_400_000);
+    const v = t.map((_, i) => i % 7);
+    const w = toWireSeries(series(t, v));
+    expect(w.dt).toBe(5_400_000);
+    expect(fromWireSeries(JSON.parse(JSON.stringify(w)))).toEqual(series(t, v));
+  });
+
+  it("keeps the steps of two points, or of a series with a gap, as a list", () => {
+    expect(toWireSeries(series([10, 20], [1, 2])).dt).toEqual([0, 10]);
+    expect(toWireSeries(series([10, 20, 25, 30], [1, 2, null, 3])).dt).toEqual([0, 10, 5, 5]);
+  });
+
   it("handles an empty series", () => {
     const w = toWireSeries(series([], []));
     expect(w).toMatchObject({ t0: 0, dt: [], v: [] });

@@ -13,6 +13,7 @@ import { getSamplePool, openSampleClient } from "@/lib/services/samples/sample-d
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { refreshHourlyRollup } from "@/lib/services/samples/refresh-hourly-rollup";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
+import { isMinFirst } from "@/lib/trends/minmax-points";
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
@@ -26,6 +27,8 @@ let org: TestOrg;
 let client: pg.Client;
 
 interface BucketRow {
+  /** Only read from samples_3h (not part of the definition). */
+  extremes?: string;
   signal: number;
   bucket: number;
   n: number;
@@ -54,7 +57,7 @@ FROM samples WHERE well_id = $1 GROUP BY 1, 2 ORDER BY 1, 2`;
 const STORED_SQL = `
 SELECT signal, date_part('epoch', bucket) * 1000 AS bucket, n, vmin, vmax, vsum, vfirst, vlast,
        date_part('epoch', tmin) * 1000 AS tmin, date_part('epoch', tmax) * 1000 AS tmax,
-       date_part('epoch', hfirst) * 1000 AS hfirst, date_part('epoch', hlast) * 1000 AS hlast
+       date_part('epoch', hfirst) * 1000 AS hfirst, date_part('epoch', hlast) * 1000 AS hlast, extremes
 FROM samples_3h WHERE well_id = $1 ORDER BY 1, 2`;
 
 type Row = [signal: number, t: number, v: number];
@@ -89,9 +92,12 @@ async function compare(): Promise<BucketRow[]> {
   const expected = (await client.query<BucketRow>(DEFINITION_SQL, [org.wellId])).rows;
   const stored = await readStored();
   expect(stored.map((r) => [r.signal, r.bucket])).toEqual(expected.map((r) => [r.signal, r.bucket]));
-  stored.forEach((row, i) => {
+  stored.forEach(({ extremes, ...row }, i) => {
     const want = expected[i];
     expect({ ...row, vsum: 0 }).toEqual({ ...want, vsum: 0 });
+    // The generated column (migration 20261202000008): the extremes as float4, the earlier first.
+    const drawn = isMinFirst(row.tmin, row.tmax, row.vfirst, row.vmin, row.vmax) ? [row.vmin, row.vmax] : [row.vmax, row.vmin];
+    expect(extremes!.split(",").map((x) => Math.fround(Number(x)))).toEqual(drawn.map((v) => Math.fround(v)));
     // Sums of sums add in another order than the sum of the values: equal to rounding.
     expect(row.vsum).toBeCloseTo(want.vsum, 6);
   });
