@@ -191,17 +191,23 @@ describe("an outage in bucketed data", () => {
     } finally {
       await client.end();
     }
-    const d = await getTrendData(other.actors.engineer, other.wellId, { from: start, to: END, width: 1200 });
-    expect(d.resolution).toBe("minmax");
-    const casing = d.series[0];
-    const gaps = casing.v.flatMap((v, i) => (v === null ? [i] : []));
-    expect(gaps).toHaveLength(1);
-    expect(casing.t[gaps[0]]).toBeGreaterThan(start + 12 * DAY);
-    expect(casing.t[gaps[0]]).toBeLessThan(start + 15 * DAY);
-    expect(casing.v.filter((v) => v !== null).every((v) => v >= 900 && v <= 906)).toBe(true);
-    const sent = decodeTrendData(JSON.parse(new TextDecoder().decode(serializeTrendData(d))) as WireTrendData);
-    expect(sent.series[0]).toEqual({ signal: casing.signal, unit: casing.unit, t: casing.t, v: [...casing.v] });
-    expect(d.series[1]).toEqual({ signal: "tubing_pressure", unit: "psig", t: [], v: [] });
+    // 30 days: hourly buckets; 90 days: the stored 3-hour buckets, whose numbers are sent only around a gap.
+    for (const days of [30, 90]) {
+      const d = await getTrendData(other.actors.engineer, other.wellId, { from: END - days * DAY, to: END, width: 1200 });
+      expect(d.resolution).toBe("minmax");
+      expect(d.bucketMs).toBe(days === 30 ? 60 * MINUTE : 180 * MINUTE);
+      const casing = d.series[0];
+      const gaps = casing.v.flatMap((v, i) => (v === null ? [i] : []));
+      expect(gaps).toHaveLength(1);
+      expect(casing.t[gaps[0]]).toBeGreaterThan(start + 12 * DAY);
+      expect(casing.t[gaps[0]]).toBeLessThan(start + 15 * DAY);
+      for (let i = 1; i < casing.t.length; i++) expect(casing.t[i]).toBeGreaterThan(casing.t[i - 1]);
+      expect(casing.t[0]).toBeGreaterThanOrEqual(start);
+      expect(casing.v.filter((v) => v !== null).every((v) => v >= 900 && v <= 906)).toBe(true);
+      const sent = decodeTrendData(JSON.parse(new TextDecoder().decode(serializeTrendData(d))) as WireTrendData);
+      expect(sent.series[0]).toEqual({ signal: casing.signal, unit: casing.unit, t: casing.t, v: [...casing.v] });
+      expect(d.series[1]).toEqual({ signal: "tubing_pressure", unit: "psig", t: [], v: [] });
+    }
   });
 });
 
