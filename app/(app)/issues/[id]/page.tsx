@@ -55,7 +55,7 @@ export default async function IssuePage({ params }: { params: Promise<{ id: stri
   const now = new Date();
   const dates = { today: now.toISOString().slice(0, 10), tomorrow: new Date(now.getTime() + 86_400_000).toISOString().slice(0, 10) };
   const hours = (new Date(windowEnd).getTime() - new Date(issue.startedAt).getTime()) / 3_600_000;
-  const valveText = (n: number | null) => (n === null ? "not known" : `valve ${n} (counting from the top)`);
+  const valve = (n: number) => `valve ${n} (counting from the top)`;
   const isValveMismatch = issue.inferredOperatingValve !== null && issue.expectedOperatingValve !== null && issue.inferredOperatingValve !== issue.expectedOperatingValve;
 
   return (
@@ -114,8 +114,14 @@ export default async function IssuePage({ params }: { params: Promise<{ id: stri
             </div>
             <div className="rounded border border-line bg-paper-raised p-4" data-testid="operating-valve">
               <h2 className="mb-1 text-sm font-semibold">Operating valve</h2>
-              <p className="text-sm">The valve design expects gas through {valveText(issue.expectedOperatingValve)}.</p>
-              <p className="text-sm">The trends suggest gas enters through {valveText(issue.inferredOperatingValve)}.</p>
+              <p className="text-sm">
+                {issue.expectedOperatingValve === null ? "The valve design does not say which valve should pass gas." : `The valve design expects gas through ${valve(issue.expectedOperatingValve)}.`}
+              </p>
+              <p className="text-sm">
+                {issue.inferredOperatingValve === null
+                  ? "The trends behind this issue do not show which valve passes gas."
+                  : `The trends suggest gas enters through ${valve(issue.inferredOperatingValve)}.`}
+              </p>
               {isValveMismatch && <p className="mt-1 text-xs font-medium text-warn">Injecting shallower than designed: worth a look at the valve string.</p>}
               <p className="mt-1 text-xs text-ink-soft">{issue.well.mandrels.length} mandrels · design injection pressure {issue.well.injectionPressurePsig} psig</p>
             </div>
