@@ -21,7 +21,7 @@ LOG_DIR="$DATA_DIR/logs"
 # PostgreSQL refuses to run as root. As root we run it as an unprivileged
 # user; that user must be able to traverse the path to its data folder, which
 # is not true under a mode-700 home such as /root. Then the cluster lives
-# under /tmp/bellows-<hash of the clone path> and .data/<profile>/pg links to it.
+# under a new /tmp/bellows-XXXXXXXXXX folder and .data/<profile>/pg links to it.
 if [ "$(id -u)" = 0 ]; then
   PG_OS_USER="${PG_OS_USER:-postgres}"
 else

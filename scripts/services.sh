@@ -34,9 +34,11 @@ pg_dir() {
   if [ -L "$link" ]; then readlink "$link"; return; fi
   if [ -d "$link" ]; then echo "$link"; return; fi
   if [ "$(id -u)" = 0 ] && ! runuser -u "$PG_OS_USER" -- test -x "$DATA_DIR"; then
-    local hash; hash=$(printf '%s' "$ROOT" | sha1sum | cut -c1-10)
-    local target="/tmp/bellows-$hash/$PROFILE-pg"
-    mkdir -p "$(dirname "$target")"; chmod 755 "$(dirname "$target")"
+    # A new folder for each clone (the link, kept in .data, finds it again): a
+    # folder named after the clone's path outlived a deleted clone, and a fresh
+    # clone at the same path started on the old cluster and its data.
+    local parent; parent=$(mktemp -d /tmp/bellows-XXXXXXXXXX); chmod 755 "$parent"
+    local target="$parent/$PROFILE-pg"
     ln -s "$target" "$link"; echo "$target"; return
   fi
   echo "$link"
