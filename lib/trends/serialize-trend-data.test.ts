@@ -5,7 +5,7 @@ import { describe, expect, it } from "vitest";
 import { serializeTrendData } from "./serialize-trend-data";
 import type { TrendData, TrendSeries } from "./trend-types";
 import { decodeTrendData, toWireSeries } from "./trend-wire";
-import { textSeries } from "./text-series";
+import { evenTextSeries, evenTimes, textSeries } from "./text-series";
 
 const decode = (b: Uint8Array) => new TextDecoder().decode(b);
 const wire = (d: TrendData) => JSON.stringify({ ...d, series: d.series.map(toWireSeries) });
@@ -71,5 +71,23 @@ describe("serializeTrendData", () => {
     // Any other reader sees ordinary numbers.
     expect(held.v).toEqual(plain.v);
     expect(held).toEqual(plain);
+  });
+
+  it("writes evenly spaced times held as a start and a step exactly as it writes the same times in full", () => {
+    const times = { t0: 1_780_002_700_000, step: 5_400_000, count: 4 };
+    const held = evenTextSeries({ signal: "casing_pressure", unit: "psig" }, times, "1008.03,1091.48,null,1e+07");
+    const plain: TrendSeries = { signal: "casing_pressure", unit: "psig", t: evenTimes(times), v: [1008.03, 1091.48, null, 1e7] };
+    const text = decode(serializeTrendData(makeData([held])));
+    expect(text).toContain('"t0":1780002700000,"dt":5400000,');
+    expect(JSON.parse(text)).toEqual(JSON.parse(wire(makeData([plain]))));
+    expect(held).toEqual(plain);
+    expect(Object.isFrozen(held.t)).toBe(true);
+    expect(decodeTrendData(JSON.parse(text)).series[0]).toEqual(plain);
+  });
+
+  it("writes two evenly spaced points as steps, as toWireTimes does", () => {
+    const held = evenTextSeries({ signal: "gas_rate", unit: "Mscf/d" }, { t0: 1000, step: 500, count: 2 }, "1,2");
+    const plain: TrendSeries = { signal: "gas_rate", unit: "Mscf/d", t: [1000, 1500], v: [1, 2] };
+    expect(decode(serializeTrendData(makeData([held])))).toBe(wire(makeData([plain])));
   });
 });

@@ -7,7 +7,7 @@
 // (lib/services/trends/trend-sample-cache.ts), so a repeated chart only serializes
 // its small overlays.
 import type { TrendData, TrendSeries } from "./trend-types";
-import { valueTextOf } from "./text-series";
+import { evenTimesOf, valueTextOf } from "./text-series";
 import { toWireSeries, toWireTimes } from "./trend-wire";
 
 const encoder = new TextEncoder();
@@ -27,7 +27,9 @@ function encodeSeries(series: readonly TrendSeries[]): Uint8Array {
 function seriesJson(s: TrendSeries): string {
   const text = valueTextOf(s);
   if (text === undefined) return JSON.stringify(toWireSeries(s));
-  const { t0, dt } = toWireTimes(s.t);
+  const even = evenTimesOf(s);
+  // Evenly spaced times go out as toWireTimes would write them, without being built.
+  const { t0, dt } = even && even.count >= 3 ? { t0: even.t0, dt: even.step } : toWireTimes(s.t);
   return `{"signal":${JSON.stringify(s.signal)},"unit":${JSON.stringify(s.unit)},"t0":${JSON.stringify(t0)},"dt":${JSON.stringify(dt)},"v":[${text}]}`;
 }
 

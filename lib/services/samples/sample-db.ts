@@ -40,8 +40,9 @@ export function getSamplePool(): pg.Pool {
 const CHART_CONNECTION_OPTIONS = `${CONNECTION_OPTIONS} -c plan_cache_mode=force_generic_plan`;
 
 /**
- * A pool for the chart's reads, apart from the write pool above, so a chart never
- * waits for a connection behind a long API write. Its size only needs to cover the
+ * A pool for the chart's reads (and the signed-in user check every request makes,
+ * lib/services/auth/find-active-actor.ts), apart from the write pool above, so a
+ * chart never waits for a connection behind a long API write. Its size only needs to cover the
  * CPUs: more concurrent reads than cores just queue inside PostgreSQL.
  */
 export function getChartPool(): pg.Pool {

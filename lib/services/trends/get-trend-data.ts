@@ -12,7 +12,7 @@ import type { WellDesign } from "@/lib/gaslift/types";
 import { DEFAULT_WIDTH_PX, chooseBucketMs, chooseBucketSource, planBuckets, pointCap, type BucketPlan } from "@/lib/trends/bucket-plan";
 import { breakGaps, gapPositions, minMaxPointTimes, timesWithGaps } from "@/lib/trends/minmax-points";
 import { insertNulls } from "@/lib/trends/number-list-text";
-import { textSeries, valueTextOf } from "@/lib/trends/text-series";
+import { evenTextSeries, evenTimesOf, textSeries, valueTextOf } from "@/lib/trends/text-series";
 import { formatOperatingValve, formatValveLabel } from "@/lib/trends/valve-label";
 import type { TrendData, TrendOperatingPoint, TrendSeries, TrendValveLine } from "@/lib/trends/trend-types";
 import { getChartPool } from "@/lib/services/samples/sample-db";
@@ -89,8 +89,8 @@ async function readSamplePart(db: pg.Pool, q: SeriesQuery, signals: Signal[], wi
   return readThroughCache(key, readVersion, async () => {
     const [reduced, recent] = await Promise.all([readReducedSeries(db, q, signals, widthPx), readRecentMedians(db, q.wellId, q.fromMs, q.toMs)]);
     for (const s of reduced.series) {
-      Object.freeze(s.t);
-      // A text series' values are parsed (and frozen) only if read.
+      // A text series' values, and evenly spaced times, are built (and frozen) only if read.
+      if (evenTimesOf(s) === undefined) Object.freeze(s.t);
       if (valueTextOf(s) === undefined) Object.freeze(s.v);
       Object.freeze(s);
     }
@@ -133,11 +133,14 @@ function toRawSeries(signals: Signal[], raw: Map<number, { t: number[]; v: numbe
 /** Bucketed series keep their values as the database's number text (lib/trends/text-series.ts). */
 function toBucketSeries(signals: Signal[], buckets: Map<number, MinMaxColumns>, bucketMs: number): TrendSeries[] {
   return signals.map((signal) => {
-    const { starts, values } = buckets.get(SIGNAL_CODE[signal]) ?? { starts: [], values: "" };
+    const head = { signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]] };
+    const { starts, consecutive, values } = buckets.get(SIGNAL_CODE[signal]) ?? { starts: [], consecutive: true, values: "" };
+    // Consecutive buckets give evenly spaced points (minMaxPointTimes) and no gap.
+    if (consecutive && starts.length > 0) return evenTextSeries(head, { t0: starts[0] + bucketMs / 4, step: bucketMs / 2, count: 2 * starts.length }, values);
     const t = minMaxPointTimes(starts, bucketMs);
     // A missing bucket or two is a short outage; more breaks the line.
     const gaps = gapPositions(t, { factor: 3, minGapMs: MIN_GAP_MS });
-    return textSeries({ signal, unit: CANONICAL_UNIT[SIGNAL_QUANTITY[signal]], t: timesWithGaps(t, gaps) }, insertNulls(values, gaps));
+    return textSeries({ ...head, t: timesWithGaps(t, gaps) }, insertNulls(values, gaps));
   });
 }
 

@@ -211,6 +211,8 @@ const ARRAY_PARSERS = minMaxTypeParsers(pg.types);
 export interface MinMaxColumns {
   /** Bucket starts, epoch ms, ascending. */
   starts: number[];
+  /** No bucket missing between the first and the last (the chart points are then evenly spaced). */
+  consecutive: boolean;
   /** Two values per bucket, first and second, as JSON number text (number-list-text.ts). */
   values: NumberListText;
 }
@@ -230,21 +232,31 @@ export async function readMinMaxBuckets(db: pg.Pool | pg.ClientBase, q: SeriesQu
   const counts = new Map<number, number>();
   for (const row of r.rows) {
     const code = Number(row.signal);
-    const k = row.k ?? Array.from({ length: row.nb ?? 0 }, (_, i) => row.b0! + i);
-    const starts = new Array<number>(k.length);
+    const count = row.k ? row.k.length : (row.nb ?? 0);
+    const starts = new Array<number>(count);
     let isSorted = true;
-    for (let i = 0; i < k.length; i++) {
-      starts[i] = ORIGIN_MS + k[i] * bucketMs;
-      if (i > 0 && k[i] <= k[i - 1]) isSorted = false;
+    let isConsecutive = true;
+    if (row.k) {
+      const k = row.k;
+      for (let i = 0; i < count; i++) {
+        starts[i] = ORIGIN_MS + k[i] * bucketMs;
+        if (i > 0 && k[i] !== k[i - 1] + 1) {
+          isConsecutive = false;
+          if (k[i] <= k[i - 1]) isSorted = false;
+        }
+      }
+    } else {
+      for (let i = 0; i < count; i++) starts[i] = ORIGIN_MS + (row.b0! + i) * bucketMs;
     }
     let values = row.v === null ? "" : sql.values === "pairs" ? flattenPairArray(row.v) : jsonSafe(row.v);
     if (!isSorted) {
       const order = starts.map((_, i) => i).sort((a, b) => starts[a] - starts[b]);
       values = reorderPairs(values, order);
       starts.sort((a, b) => a - b);
+      isConsecutive = starts.every((t, i) => i === 0 || t - starts[i - 1] === bucketMs);
     }
-    buckets.set(code, { starts, values });
-    if (k.length > 0) counts.set(code, row.n ?? 0);
+    buckets.set(code, { starts, consecutive: isConsecutive, values });
+    if (count > 0) counts.set(code, row.n ?? 0);
   }
   return { buckets, counts };
 }
