@@ -158,9 +158,16 @@ const ROLLUPS: Record<Exclude<BucketSource, "samples">, { table: string; extreme
  * request, which was most of this read's database CPU (~3.0 against ~1.6 ms for 90
  * days × 5 signals, measured). The bucket numbers are sent only when the buckets
  * are not consecutive (b0, the first, and nb, the count, say where they are
- * otherwise): numbering and printing 3,600 of them cost ~1 ms more (measured). The
- * ORDER BY inside string_agg guarantees the order (no check needed); it cost ~0.4
- * ms more than a sorted subquery, whose order PostgreSQL does not promise.
+ * otherwise): numbering and printing 3,600 of them cost ~1 ms more (measured).
+ *
+ * The list's order comes from a subquery sorted by bucket (an index-order read, no
+ * sort): an ORDER BY inside string_agg sorted the rows again, about half of this
+ * read's database time (pgbench here: ~1.3–1.5 against ~0.67 ms for 90 days × 5
+ * signals). PostgreSQL's manual (§4.2.7) says a sorted subquery "will usually work"
+ * and names when it can fail: further processing at the aggregate's level, "such as a
+ * join", that reorders the rows. The aggregate here reads that subquery alone, and
+ * an integration test stores buckets out of time order and reads them back in order
+ * (tests/integration/trends/three-hour-rollup.test.ts).
  */
 const THREE_HOUR_RANGE = `well_id = $1 AND signal = s.code
       AND bucket >= date_bin(interval '${SOURCE_ROW_MS.three_hourly} milliseconds', $3::timestamptz, ${ORIGIN}) AND bucket <= $4`;
@@ -171,8 +178,8 @@ SELECT s.code AS signal, x.n, x.nb, x.b0, x.v,
 FROM unnest($2::smallint[]) AS s(code)
 CROSS JOIN LATERAL (
   SELECT sum(n)::float8 AS n, count(*)::int AS nb, ${bucketNumber("min(bucket)")} AS b0, ${bucketNumber("max(bucket)")} AS b1,
-         string_agg(extremes, ',' ORDER BY bucket) AS v
-  FROM samples_3h WHERE ${THREE_HOUR_RANGE}
+         string_agg(extremes, ',') AS v
+  FROM (SELECT bucket, n, extremes FROM samples_3h WHERE ${THREE_HOUR_RANGE} ORDER BY bucket) r
 ) x`;
 
 interface MinMaxStatement {

@@ -14,6 +14,7 @@ import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { refreshHourlyRollup } from "@/lib/services/samples/refresh-hourly-rollup";
 import type { ValueColumns } from "@/lib/ingest/value-buffer";
 import { isMinFirst } from "@/lib/trends/minmax-points";
+import { readMinMaxBuckets } from "@/lib/services/trends/query-trend-series";
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
@@ -22,6 +23,7 @@ const CASING = 1;
 const TUBING = 2;
 const INJECTION = 3;
 const GAS = 4;
+const LIQUID = 5;
 
 let org: TestOrg;
 let client: pg.Client;
@@ -232,5 +234,26 @@ describe("samples_3h kept by the sample writer", () => {
     expect(await readStored()).toEqual(first);
     expect((await readVersions()).get(TUBING)).not.toBe(before.get(TUBING));
     await compare();
+  });
+
+  it("reads the stored extremes back in bucket order when the buckets were stored out of time order", async () => {
+    // Liquid in eight 3-hour buckets from 2026-06-16 00:00 UTC, written last bucket
+    // first, then the second bucket rewritten (its row moves to the end of the table):
+    // the list must still come back in time order (query-trend-series.ts relies on a
+    // sorted subquery feeding string_agg; PostgreSQL manual §4.2.7).
+    const day = (B0 - 6 * HOUR + 2 * 24 * HOUR - B0) / MINUTE; // minutes from B0 to 2026-06-16 00:00
+    const value = (m: number) => 300 + ((m * 13) % 41);
+    for (let b = 7; b >= 0; b--) await write(minutes(LIQUID, day + b * 180, day + b * 180 + 90, value));
+    await write([[LIQUID, B0 + (day + 200) * MINUTE, 5]]);
+    await compare();
+    const from = B0 + day * MINUTE;
+    const answer = await readMinMaxBuckets(client, { wellId: org.wellId, codes: [LIQUID], fromMs: from, toMs: from + 24 * HOUR - MINUTE }, 3 * HOUR, "three_hourly");
+    const rows = (await readStored()).filter((r) => r.signal === LIQUID && r.bucket >= from);
+    expect(rows.map((r) => r.bucket)).toEqual(Array.from({ length: 8 }, (_, b) => from + b * 3 * HOUR));
+    const columns = answer.buckets.get(LIQUID)!;
+    expect(columns.starts).toEqual(rows.map((r) => r.bucket));
+    expect(columns.consecutive).toBe(true);
+    expect(columns.values).toBe(rows.map((r) => r.extremes).join(","));
+    expect(columns.values.split(",").slice(2, 4)).toContain("5");
   });
 });
