@@ -17,8 +17,10 @@ export function flattenPairArray(text: string): NumberListText {
 
 /** The list with every element that JSON cannot hold (NaN, ±Infinity) written as null. */
 export function jsonSafe(list: NumberListText): NumberListText {
-  // Number text holds no I or N otherwise (exponents are a lower-case e).
-  if (!/[IN]/.test(list)) return list;
+  // Number text holds no I or N otherwise (exponents are a lower-case e). Two plain
+  // searches: the regular expression /[IN]/ over each ~14 kB list of a 90-day chart
+  // showed up in CPU profiles of the chart read; a plain search did not.
+  if (!list.includes("N") && !list.includes("I")) return list;
   return list
     .split(",")
     .map((x) => (Number.isFinite(Number(x)) ? x : "null"))
