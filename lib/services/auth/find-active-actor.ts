@@ -1,4 +1,4 @@
-import { getChartPool } from "@/lib/services/samples/sample-db";
+import { getReadPool } from "@/lib/services/samples/sample-db";
 import type { Actor } from "@/lib/auth/actor";
 import type { Role } from "@/lib/auth/roles";
 
@@ -12,7 +12,7 @@ import type { Role } from "@/lib/auth/roles";
  */
 export async function findActiveActor(userId: number): Promise<Actor | null> {
   if (!Number.isSafeInteger(userId)) return null;
-  const r = await getChartPool().query<{ id: number; organization_id: number; role: Role }>({
+  const r = await getReadPool().query<{ id: number; organization_id: number; role: Role }>({
     name: "bellows-active-actor",
     text: "SELECT id, organization_id, role FROM users WHERE id = $1 AND active",
     values: [userId],

@@ -15,7 +15,7 @@ import { insertNulls } from "@/lib/trends/number-list-text";
 import { evenTextSeries, evenTimesOf, textSeries, valueTextOf } from "@/lib/trends/text-series";
 import { formatOperatingValve, formatValveLabel } from "@/lib/trends/valve-label";
 import type { TrendData, TrendOperatingPoint, TrendSeries, TrendValveLine } from "@/lib/trends/trend-types";
-import { getChartPool } from "@/lib/services/samples/sample-db";
+import { getReadPool } from "@/lib/services/samples/sample-db";
 import { countRawValues, readMinMaxBuckets, readRawValues, type MinMaxColumns, type SeriesQuery } from "./query-trend-series";
 import { RECENT_MEDIAN_CODES, readRecentMedians, type RecentMedians } from "./read-recent-medians";
 import { readSeriesVersions, readThroughCache } from "./trend-sample-cache";
@@ -46,7 +46,7 @@ export async function getTrendData(actor: Actor, wellId: number, req: TrendReque
   }
   const signals = [...new Set(req.signals && req.signals.length > 0 ? req.signals : DEFAULT_TREND_SIGNALS)];
   const widthPx = req.width ?? DEFAULT_WIDTH_PX;
-  const db = getChartPool();
+  const db = getReadPool();
   const q: SeriesQuery = { wellId, codes: signals.map((s) => SIGNAL_CODE[s]), fromMs: from, toMs: to };
   const scope = { organizationId: actor.organizationId, wellId, fromMs: from, toMs: to };
 

@@ -21,7 +21,7 @@ import { listSavedFilters } from "@/lib/services/issues/list-saved-filters";
 import { deleteSavedFilter } from "@/lib/services/issues/delete-saved-filter";
 import { listResolutionActions } from "@/lib/services/issues/list-resolution-actions";
 import { saveResolutionActions } from "@/lib/services/issues/save-resolution-actions";
-import { DEFAULT_RESOLUTION_ACTIONS } from "@/lib/validations/issues";
+import { DEFAULT_RESOLUTION_ACTIONS, ISSUE_STATUSES } from "@/lib/validations/issues";
 import { closeDb, makeOrg, type TestOrg } from "../helpers";
 import { makeIssue, makeWell } from "./issue-fixtures";
 
@@ -73,6 +73,48 @@ describe("ranked list", () => {
     expect(bySince.total).toBe(3);
     expect((await listRankedIssues(o.actors.engineer, { sort: "since", dir: "asc", pageSize: 1, page: 3 })).rows.map((r) => r.id)).toEqual([mine.id]);
     expect(await code(listRankedIssues(o.actors.engineer, { sort: "drop table" }))).toBe("invalid");
+  });
+
+  it("pages every sort in both directions as sorting the whole list would, and filters by field", async () => {
+    const o = await makeOrg("sorts");
+    const w1 = await makeWell(o, `Bravo ${process.pid}`);
+    const w2 = await makeWell(o, `Alpha ${process.pid}`);
+    const made = [
+      await makeIssue(o, { wellId: w1, rule: "heading", risk: 30, severity: 50, startedAt: new Date(Date.now() - 30 * 3600_000) }),
+      await makeIssue(o, { wellId: w2, rule: "heading", risk: 30, severity: 80, startedAt: new Date(Date.now() - 5 * 3600_000) }),
+      await makeIssue(o, { wellId: w1, rule: "valve_leak", risk: 90, severity: 20, status: "acknowledged", startedAt: new Date(Date.now() - 50 * 3600_000) }),
+      await makeIssue(o, { wellId: w2, rule: "valve_leak", risk: 5, severity: 95, status: "assigned", assigneeId: o.actors.operator.userId }),
+    ];
+    await made[3].update({ priority: "high", due_on: "2026-12-09" });
+    const all = (await listRankedIssues(o.actors.engineer, { pageSize: 100 })).rows;
+    expect(all).toHaveLength(4);
+    expect(all.find((r) => r.id === made[3].id)).toMatchObject({ priority: "high", dueOn: "2026-12-09", assigneeName: expect.any(String) });
+    // The oracle: each sort key in JavaScript over the whole list, ties by id in the same direction.
+    const keys: Record<string, (r: (typeof all)[number]) => (string | number)[]> = {
+      risk: (r) => [r.productionAtRisk, r.severity],
+      severity: (r) => [r.severity, -r.productionAtRisk],
+      since: (r) => [Date.parse(r.since)],
+      duration: (r) => [r.durationHours],
+      well: (r) => [r.wellName],
+      status: (r) => [ISSUE_STATUSES.indexOf(r.status)], // enum order, as declared
+      lastChange: (r) => [Date.parse(r.lastChange)],
+    };
+    for (const [sort, key] of Object.entries(keys)) {
+      for (const dir of ["asc", "desc"] as const) {
+        const sign = dir === "asc" ? 1 : -1;
+        const cmp = (a: (typeof all)[number], b: (typeof all)[number]) => {
+          const [ka, kb] = [key(a), key(b)];
+          for (let i = 0; i < ka.length; i++) if (ka[i] !== kb[i]) return (sort === "severity" && i === 1 ? 1 : sign) * (ka[i] < kb[i] ? -1 : 1);
+          return sign * (a.id - b.id);
+        };
+        const want = [...all].sort(cmp).map((r) => r.id);
+        const paged = [];
+        for (let page = 1; page <= 2; page++) paged.push(...(await listRankedIssues(o.actors.engineer, { sort, dir, pageSize: 2, page })).rows.map((r) => r.id));
+        expect({ sort, dir, ids: paged }).toEqual({ sort, dir, ids: want });
+      }
+    }
+    expect((await listRankedIssues(o.actors.engineer, { field: o.fieldId })).total).toBe(4);
+    expect((await listRankedIssues(o.actors.engineer, { field: other.fieldId })).total).toBe(0);
   });
 
   it("operators only ever see issues assigned to them", async () => {

@@ -19,7 +19,7 @@ import { serializeTrendData } from "@/lib/trends/serialize-trend-data";
 import { decodeTrendData, type WireTrendData } from "@/lib/trends/trend-wire";
 import { readTrendContext } from "@/lib/services/trends/read-trend-context";
 import { clearTrendSampleCache } from "@/lib/services/trends/trend-sample-cache";
-import { getChartPool, getSamplePool, openSampleClient } from "@/lib/services/samples/sample-db";
+import { getReadPool, getSamplePool, openSampleClient } from "@/lib/services/samples/sample-db";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { refreshHourlyRollupOf } from "./trend-fixtures";
 import { DAY, MINUTE, makeFixture, valueAt, writeFixture } from "./trend-fixtures";
@@ -62,7 +62,7 @@ afterAll(async () => {
     await getSamplePool().query(`DELETE FROM ${table} WHERE well_id = ANY($1::int[])`, [[org.wellId, other.wellId]]);
   }
   await getSamplePool().end();
-  await getChartPool().end();
+  await getReadPool().end();
   await closeDb();
 });
 
@@ -215,7 +215,7 @@ describe("which table a trend is read from", () => {
   /** The tables named in FROM clauses of the sample queries one getTrendData call runs. */
   async function tablesRead(from: number, to: number): Promise<Set<string>> {
     clearTrendSampleCache();
-    const pool = getChartPool();
+    const pool = getReadPool();
     const spy = vi.spyOn(pool, "query");
     try {
       await getTrendData(org.actors.engineer, org.wellId, { from, to, width: 1200 });
@@ -272,7 +272,7 @@ describe("the in-memory chart cache", () => {
     // Kept from the second request on (the first only marks the range as asked for).
     await getTrendData(org.actors.engineer, org.wellId, range());
     const first = await getTrendData(org.actors.engineer, org.wellId, range());
-    const spy = vi.spyOn(getChartPool(), "query");
+    const spy = vi.spyOn(getReadPool(), "query");
     try {
       const again = await getTrendData(org.actors.engineer, org.wellId, range());
       // The version check and the overlays (issues, field events, valve design), no samples.
