@@ -19,6 +19,7 @@ import { getReadPool } from "@/lib/services/samples/sample-db";
 import { countRawValues, readMinMaxBuckets, readRawValues, type MinMaxColumns, type SeriesQuery } from "./query-trend-series";
 import { RECENT_MEDIAN_CODES, readRecentMedians, type RecentMedians } from "./read-recent-medians";
 import { readSeriesVersions, readThroughCache } from "./trend-sample-cache";
+import { readLiveMedians } from "./live-medians-cache";
 import { readTrendContext } from "./read-trend-context";
 
 /** The five signals of the chart's three panels. */
@@ -79,25 +80,32 @@ interface SamplePart {
 }
 
 /**
- * Everything read from the samples: the reduced series and the recent medians,
- * through the in-memory cache (trend-sample-cache.ts) keyed on the versions of every
- * series read. Cached answers are shared between requests, so they are frozen.
+ * Everything read from the samples: the reduced series, through the in-memory cache
+ * of answers (trend-sample-cache.ts), and the recent medians, through the per-well
+ * cache of live medians (live-medians-cache.ts). Both are keyed on the versions of
+ * every series read, read first. Cached answers are shared between requests, so
+ * they are frozen.
  */
 async function readSamplePart(db: pg.Pool, q: SeriesQuery, signals: Signal[], widthPx: number): Promise<SamplePart> {
   const key = `${q.wellId}|${q.codes.join(",")}|${q.fromMs}|${q.toMs}|${widthPx}`;
-  const readVersion = () => readSeriesVersions(db, q.wellId, [...new Set([...q.codes, ...RECENT_MEDIAN_CODES])]);
-  return readThroughCache(key, readVersion, async () => {
-    const [reduced, recent] = await Promise.all([readReducedSeries(db, q, signals, widthPx), readRecentMedians(db, q.wellId, q.fromMs, q.toMs)]);
-    for (const s of reduced.series) {
-      // A text series' values, and evenly spaced times, are built (and frozen) only if read.
-      if (evenTimesOf(s) === undefined) Object.freeze(s.t);
-      if (valueTextOf(s) === undefined) Object.freeze(s.v);
-      Object.freeze(s);
-    }
-    // A frozen series list also lets serializeTrendData reuse its encoded bytes.
-    Object.freeze(reduced.series);
-    return Object.freeze({ reduced: Object.freeze(reduced), recent: Object.freeze(recent) });
-  });
+  const version = await readSeriesVersions(db, q.wellId, [...new Set([...q.codes, ...RECENT_MEDIAN_CODES])]);
+  const [reduced, recent] = await Promise.all([
+    readThroughCache(key, version, async () => freezeReduced(await readReducedSeries(db, q, signals, widthPx))),
+    readLiveMedians(q.wellId, version, q.fromMs, q.toMs, () => readRecentMedians(db, q.wellId, q.fromMs, q.toMs)),
+  ]);
+  return { reduced, recent };
+}
+
+function freezeReduced(reduced: SamplePart["reduced"]): SamplePart["reduced"] {
+  for (const s of reduced.series) {
+    // A text series' values, and evenly spaced times, are built (and frozen) only if read.
+    if (evenTimesOf(s) === undefined) Object.freeze(s.t);
+    if (valueTextOf(s) === undefined) Object.freeze(s.v);
+    Object.freeze(s);
+  }
+  // A frozen series list also lets serializeTrendData reuse its encoded bytes.
+  Object.freeze(reduced.series);
+  return Object.freeze(reduced);
 }
 
 /**

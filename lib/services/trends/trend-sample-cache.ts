@@ -1,21 +1,19 @@
-// Recently drawn chart answers (the reduced series and the recent medians), kept in
-// this process's memory. An answer is reused only while every series it was read
-// from still has the version it had before the read (sample_series_versions, renewed
-// in the same transaction as any write to the series, by whichever process writes),
-// so it can never show data older than the database holds. Checking costs one
-// primary-key read; a miss costs what an uncached request costs plus that read,
-// except for a range asked for the first time, which is read without it (see below).
-// Issues, field events and the well's valve design are not cached: they change
-// through other paths and are cheap to read.
+// Recently drawn chart answers (the reduced series), kept in this process's memory.
+// An answer is reused only while every series it was read from still has the
+// version it had before the read (sample_series_versions, renewed in the same
+// transaction as any write to the series, by whichever process writes), so it can
+// never show data older than the database holds. Checking costs one primary-key
+// read, which the chart makes on every request (the live medians,
+// live-medians-cache.ts, are kept on the same versions). Issues, field events and
+// the well's valve design are not cached: they change through other paths and are
+// cheap to read.
 //
 // An answer is kept only when its key is asked for a second time (the first time
 // only the key is remembered): most ranges are drawn once, as every drag-zoom or pan
 // asks for a new one, and keeping each of those answers promotes ~200 kB of arrays
 // per request to the old generation, to be collected there. Under the dashboard
 // bench's uncached chart run this left throughput unchanged but lowered p95 (390
-// against 487 ms and 328 against 370 ms in two A/B runs here). Such a first request
-// keeps nothing, so it skips the version read too: one round trip fewer for every
-// new range.
+// against 487 ms and 328 against 370 ms in two A/B runs here).
 import type pg from "pg";
 
 /** About 64 charts of five signals at 2,000 points: a few tens of MB at most. */
@@ -49,19 +47,18 @@ export async function readSeriesVersions(db: pg.Pool | pg.ClientBase, wellId: nu
 }
 
 /**
- * The cached value for `key` if it was read at the series' current version;
- * otherwise `read()` it, and keep it if `key` was asked for before. The version is
- * read (readVersion) before `read()` runs, so a write landing in between leaves an
- * entry that the next request finds out of date (never the reverse). A key never
- * asked for before can be neither cached nor kept, so its version is not read.
+ * The cached value for `key` if it was read at `version`, the series' current
+ * versions; otherwise `read()` it, and keep it if `key` was asked for before. The
+ * version must be read before `read()` runs, so a write landing in between leaves an
+ * entry that the next request finds out of date (never the reverse). A null version
+ * (a series never versioned) keeps nothing.
  */
-export async function readThroughCache<T>(key: string, readVersion: () => Promise<string | null>, read: () => Promise<T>): Promise<T> {
+export async function readThroughCache<T>(key: string, version: string | null, read: () => Promise<T>): Promise<T> {
   if (!entries.has(key) && !seen.has(key)) {
     if (seen.size >= MAX_SEEN) seen.clear();
     seen.add(key);
     return read();
   }
-  const version = await readVersion();
   if (version !== null) {
     const hit = entries.get(key) as Entry<T> | undefined;
     if (hit && hit.version === version) {

@@ -19,6 +19,7 @@ import { serializeTrendData } from "@/lib/trends/serialize-trend-data";
 import { decodeTrendData, type WireTrendData } from "@/lib/trends/trend-wire";
 import { readTrendContext } from "@/lib/services/trends/read-trend-context";
 import { clearTrendSampleCache } from "@/lib/services/trends/trend-sample-cache";
+import { clearLiveMedians } from "@/lib/services/trends/live-medians-cache";
 import { getReadPool, getSamplePool, openSampleClient } from "@/lib/services/samples/sample-db";
 import { writeSampleBatch } from "@/lib/services/samples/write-sample-batch";
 import { refreshHourlyRollupOf } from "./trend-fixtures";
@@ -215,6 +216,7 @@ describe("which table a trend is read from", () => {
   /** The tables named in FROM clauses of the sample queries one getTrendData call runs. */
   async function tablesRead(from: number, to: number): Promise<Set<string>> {
     clearTrendSampleCache();
+    clearLiveMedians();
     const pool = getReadPool();
     const spy = vi.spyOn(pool, "query");
     try {
@@ -305,6 +307,60 @@ describe("the in-memory chart cache", () => {
       await refreshHourlyRollupOf(client, org.wellId, at - 15 * MINUTE, at + 15 * MINUTE);
       const restored = await getTrendData(org.actors.engineer, org.wellId, range());
       expect(Math.max(...restored.series[0].v.map((v) => v ?? -Infinity))).toBe(fixture.spikeValue);
+    } finally {
+      await client.end();
+    }
+  });
+});
+
+describe("the live medians (valve lines of a chart that reaches the latest values)", () => {
+  /** The chart answer, and how many times the recent medians were read from the samples for it. */
+  async function withMedianReads(from: number, to: number) {
+    const spy = vi.spyOn(getReadPool(), "query");
+    try {
+      const d = await getTrendData(org.actors.engineer, org.wellId, { from, to, width: 1200 });
+      return { d, reads: spy.mock.calls.filter((c) => sqlOf(c[0]).includes("percentile_cont")).length };
+    } finally {
+      spy.mockRestore();
+    }
+  }
+
+  it("reads them once for every range that reaches the latest values, and afresh for one that ends before them", async () => {
+    clearLiveMedians();
+    const live = await withMedianReads(fixture.start, END);
+    expect(live.reads).toBe(1);
+    expect(live.d.overlays.recent.windowEnd).toBe(END - MINUTE);
+    // Panned and zoomed, still reaching the latest values: kept.
+    const panned = await withMedianReads(fixture.start + 3 * DAY, END + DAY);
+    expect(panned.reads).toBe(0);
+    expect(panned.d.overlays.recent).toEqual(live.d.overlays.recent);
+    // Ending ten days earlier: read for that end, and not kept in place of the live ones.
+    const earlier = await withMedianReads(fixture.start, END - 10 * DAY);
+    expect(earlier.reads).toBe(1);
+    expect(earlier.d.overlays.recent.windowEnd).toBeLessThanOrEqual(END - 10 * DAY);
+    expect((await withMedianReads(fixture.start + DAY, END)).reads).toBe(0);
+    // What was kept is what a fresh read gives.
+    clearLiveMedians();
+    const fresh = await withMedianReads(fixture.start + DAY, END);
+    expect(fresh.reads).toBe(1);
+    expect(fresh.d.overlays.recent).toEqual(live.d.overlays.recent);
+  });
+
+  it("reads them again after a write to the well's pressure or injection series, by any writer", async () => {
+    const before = await withMedianReads(fixture.start, END);
+    const at = END - 2 * MINUTE;
+    const client = await openSampleClient();
+    try {
+      const b = { length: 1, wellId: [org.wellId], signal: Uint8Array.of(3), t: Float64Array.of(at), v: Float64Array.of(5000) };
+      await writeSampleBatch(client, b);
+      const after = await withMedianReads(fixture.start, END);
+      expect(after.reads).toBe(1);
+      // Put the fixture value back: read again, and the same medians as before.
+      b.v[0] = valueAt(fixture, "injection_rate", at);
+      await writeSampleBatch(client, b);
+      const restored = await withMedianReads(fixture.start, END);
+      expect(restored.reads).toBe(1);
+      expect(restored.d.overlays.recent).toEqual(before.d.overlays.recent);
     } finally {
       await client.end();
     }
