@@ -17,10 +17,13 @@
 //      that paired run: on this shared 2-core machine the same route's figures drift
 //      by ±30% from one minute to the next, and a route run after the ranked list
 //      ran slower than the same route run alone, health included.
-//      The chart runs twice: "cold" moves the range start one minute earlier on every
-//      request, so no request can be answered from the app's in-memory chart cache
-//      (every one reads and reduces the samples), and "warm" repeats one URL, as
-//      re-opening the same chart does while no new data arrives.
+//      The chart runs three times: "cold" moves the range start one minute earlier on
+//      every request, so no request can be answered from the app's in-memory chart
+//      cache (every one reads and reduces the samples; the valve lines' recent medians
+//      are kept per well, as the range still reaches the latest values, as a live
+//      chart's does); "cold, past" moves both ends and ends a day before the latest
+//      values, so nothing at all is kept; and "warm" repeats one URL, as re-opening
+//      the same chart does while no new data arrives.
 // Targets: list and chart p95 within 3× the health p95; at most ~2,000 points per signal.
 // @ts-expect-error -- autocannon ships no type declarations; the little we use is typed below.
 import autocannonUntyped from "autocannon";
@@ -243,10 +246,14 @@ async function main() {
   const cookie = await signIn();
 
   const to = Math.floor(Date.now() / DAY) * DAY;
-  const chartPathFrom = (from: number) => `/api/wells/${chartWellId}/trends?from=${from}&to=${to}&width=1200&signals=${CHART_SIGNALS.join(",")}`;
+  const chartPathOf = (from: number, end: number) => `/api/wells/${chartWellId}/trends?from=${from}&to=${end}&width=1200&signals=${CHART_SIGNALS.join(",")}`;
+  const chartPathFrom = (from: number) => chartPathOf(from, to);
   const chartPath = chartPathFrom(to - DAYS * DAY);
   // One minute earlier per request: a new cache key each time, the same 3-hour bucket grid.
   const coldChartPath = (k: number) => chartPathFrom(to - DAYS * DAY - (k + 1) * 60_000);
+  // Both ends one minute earlier per request, ending a day before the latest values:
+  // the valve lines' recent medians are read for every request too.
+  const pastChartPath = (k: number) => chartPathOf(to - (DAYS + 1) * DAY - (k + 1) * 60_000, to - DAY - (k + 1) * 60_000);
   const listPath = "/api/issues";
   const sample = await fetch(`${APP_URL}${chartPath}`, { headers: { cookie } });
   const chartBytes = await sample.arrayBuffer();
@@ -259,6 +266,7 @@ async function main() {
   const routes: [string, string | ((k: number) => string)][] = [
     ["ranked list", listPath],
     ["chart, cold", coldChartPath],
+    ["chart, cold, past", pastChartPath],
     ["chart, warm", chartPath],
   ];
   const measure = async (name: string, path: string | ((k: number) => string)) => {
@@ -279,8 +287,10 @@ async function main() {
     console.log(`  ${r.name.padEnd(18)} ${r.p50.toFixed(0).padStart(7)} ${r.p95.toFixed(0).padStart(8)} ${r.rps.toFixed(0).padStart(7)} ${String(r.errors).padStart(8)}${ratio}`);
   }
   console.log("\n  chart = 90 d × 5 signals at 1,200 px. cold: a new range start per request, so every request");
-  console.log("  reads and reduces the samples; warm: one URL repeated, answered from the in-memory cache");
-  console.log("  after a one-row version check (new samples written by any process renew the version).");
+  console.log("  reads and reduces the samples (the valve lines' recent medians are kept per well while the");
+  console.log("  range reaches the latest values); cold, past: both ends move and the range ends a day before");
+  console.log("  the latest values, so nothing is kept; warm: one URL repeated, answered from the in-memory");
+  console.log("  cache after a one-row version check (new samples written by any process renew the version).");
   console.log("\n  points per signal in the chart answer (target ≤ ~2,000):");
   for (const s of chart.series) console.log(`    ${s.signal.padEnd(18)} ${s.t.length}`);
   console.log(`  chart answer size: ${(chartBytes.byteLength / 1024).toFixed(0)} kB`);
