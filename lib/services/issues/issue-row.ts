@@ -1,4 +1,5 @@
 // The ranked list's row and the SQL that builds it (shared by the list and the CSV export).
+import { createHash } from "node:crypto";
 import { getReadPool } from "@/lib/services/samples/sample-db";
 import type { Actor } from "@/lib/auth/actor";
 import { OPEN_STATUSES, ruleLabel, type IssueQuery, type IssueStatus } from "@/lib/validations/issues";
@@ -65,13 +66,13 @@ const issuesFrom = (needsWells: boolean) =>
 const namesWells = (sql: string) => /\b(p|w)\./.test(sql);
 
 /**
- * A FROM item (to be aliased): `select` over the filtered issues, run once per asked status (a LATERAL join over
- * the status list) so that each run is an equality on (organization, status): the
- * statements keep one plan for any parameters (the read pool's generic plans), and
- * for "organization = $1 AND status = ANY($2)" that plan read the organization's
- * ~20,000 issues of the dashboard bench through its organization index (~20 ms),
- * where one status at a time walks the (organization, status, production at risk)
- * index (~2 ms, EXPLAIN ANALYZE here).
+ * A FROM item (to be aliased): `select` over the filtered issues, run once per asked
+ * status (a LATERAL join over the status list) so that each run is an equality on
+ * (organization, status). The statements keep one plan for any parameters (the read
+ * pool's generic plans), and for "organization = $1 AND status = ANY($2)" that plan
+ * read all ~20,000 issues of the dashboard bench's organization through its
+ * organization index (~20 ms), where one status at a time walks the (organization,
+ * status, production at risk) index (~2 ms; EXPLAIN ANALYZE here).
  */
 function fromStatuses(f: { where: string; statuses: string | null }, select: (where: string) => string): string {
   if (f.statuses === null) return `(${select(f.where)})`;
@@ -81,11 +82,13 @@ function fromStatuses(f: { where: string; statuses: string | null }, select: (wh
 // Every list query is a named (prepared) statement, one per shape of filter and
 // order, so PostgreSQL plans each shape once per pooled connection: planning the
 // five-table join cost more database time than running it (pgbench here: ~1.8–2.0
-// against ~1.2 ms per page). Names come from the text, so equal texts share a plan.
+// against ~1.2 ms per page). The name is a hash of the text: this module is bundled
+// more than once (pages and route handlers) and every copy shares the one pool, so a
+// counter per copy gave one name to two texts on the same connection.
 const names = new Map<string, string>();
 function named(text: string, values: unknown[]) {
   let name = names.get(text);
-  if (!name) names.set(text, (name = `bellows-issues-${names.size + 1}`));
+  if (!name) names.set(text, (name = `bellows-issues-${createHash("sha256").update(text).digest("hex").slice(0, 24)}`));
   return { name, text, values };
 }
 

@@ -1,6 +1,6 @@
 // Ranked list, summary, bulk triage, CSV export, saved filters and the
 // other-organization 404 for every issue service.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { isAppError } from "@/lib/errors";
 import { listRankedIssues } from "@/lib/services/issues/list-ranked-issues";
 import { getIssueSummary } from "@/lib/services/issues/get-issue-summary";
@@ -115,6 +115,21 @@ describe("ranked list", () => {
     }
     expect((await listRankedIssues(o.actors.engineer, { field: o.fieldId })).total).toBe(4);
     expect((await listRankedIssues(o.actors.engineer, { field: other.fieldId })).total).toBe(0);
+  });
+
+  it("works from two copies of the list module sharing one pool, as a page and a route handler are bundled", async () => {
+    const o = await makeOrg("copies");
+    await makeIssue(o, { risk: 12 });
+    vi.resetModules();
+    const first = await import("@/lib/services/issues/issue-row");
+    vi.resetModules();
+    const second = await import("@/lib/services/issues/issue-row");
+    const base = { sort: "risk", dir: "desc", page: 1, pageSize: 50 } as const;
+    // Different shapes first in each copy, then each copy's again: every statement is named by its own text.
+    expect(await first.countIssueRows(o.actors.engineer, { ...base, status: "all" })).toBe(1);
+    expect(await second.countIssueRows(o.actors.engineer, base)).toBe(1);
+    expect(await first.countIssueRows(o.actors.engineer, base)).toBe(1);
+    expect((await second.selectIssueRows(o.actors.engineer, { ...base, status: "all" }, 50, 0)).length).toBe(1);
   });
 
   it("operators only ever see issues assigned to them", async () => {
