@@ -90,8 +90,23 @@ redis_up() {
   log "Redis up on 127.0.0.1:$REDIS_PORT"
 }
 
+# Stops this data folder's Redis, by its pid file, and never another one that
+# answers on the port: a stop run without the start's port settings used to shut
+# down whichever Redis listened on the default port (another checkout's).
 redis_down() {
-  redis-cli -p "$REDIS_PORT" ping >/dev/null 2>&1 || return 0
+  local f="$DATA_DIR/redis.pid" pid
+  if [ -f "$f" ]; then
+    pid=$(cat "$f")
+    if kill -0 "$pid" 2>/dev/null && [ "$(ps -p "$pid" -o comm= 2>/dev/null)" = "redis-server" ]; then
+      kill -TERM "$pid" 2>/dev/null || true
+      for _ in $(seq 1 50); do kill -0 "$pid" 2>/dev/null || break; sleep 0.1; done
+      log "Redis stopped"
+    fi
+    rm -f "$f"
+    return 0
+  fi
+  # No pid file: only a Redis whose working folder is this data folder.
+  [ "$(redis-cli -p "$REDIS_PORT" config get dir 2>/dev/null | sed -n 2p)" = "$DATA_DIR" ] || return 0
   redis-cli -p "$REDIS_PORT" shutdown nosave >/dev/null 2>&1 || true
   log "Redis stopped"
 }
